@@ -1,0 +1,45 @@
+import { z } from 'zod';
+import { LIMITS } from './limits';
+import { GROUP_ROLES } from '../roles';
+import { userSchema } from './auth';
+
+/** Body of POST /api/groups. */
+export const createGroupRequestSchema = z.strictObject({
+  name: z.string({ error: 'name is required' }).trim().min(1, 'name must not be empty').max(LIMITS.groupNameMax),
+});
+export type CreateGroupRequest = z.infer<typeof createGroupRequestSchema>;
+
+/** Body of PATCH /api/groups/:groupId. */
+export const renameGroupRequestSchema = createGroupRequestSchema;
+export type RenameGroupRequest = CreateGroupRequest;
+
+/** Body of POST /api/groups/:groupId/members: add a person who already has an account. */
+export const addMemberRequestSchema = z.strictObject({
+  email: z.string().trim().toLowerCase().pipe(z.email({ error: 'e-mail is not a valid address' })),
+  role: z.enum(GROUP_ROLES, { error: 'role must be admin or member' }).default('member'),
+});
+export type AddMemberRequest = z.infer<typeof addMemberRequestSchema>;
+
+/** Body of PATCH /api/groups/:groupId/members/:userId. */
+export const changeMemberRoleRequestSchema = z.strictObject({
+  role: z.enum(GROUP_ROLES, { error: 'role must be admin or member' }),
+});
+export type ChangeMemberRoleRequest = z.infer<typeof changeMemberRoleRequestSchema>;
+
+/** One member of a group. */
+export const groupMemberSchema = z.object({
+  user: userSchema,
+  role: z.enum(GROUP_ROLES),
+  since: z.string(),
+});
+export type GroupMemberView = z.infer<typeof groupMemberSchema>;
+
+/** Answer of GET /api/groups/:groupId. */
+export const groupDetailSchema = z.object({
+  id: z.string(),
+  name: z.string(),
+  createdAt: z.string(),
+  role: z.enum(GROUP_ROLES),
+  members: z.array(groupMemberSchema),
+});
+export type GroupDetail = z.infer<typeof groupDetailSchema>;

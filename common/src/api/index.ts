@@ -1,0 +1,4 @@
+export * from './limits';
+export * from './auth';
+export * from './groups';
+export * from './notebooks';

@@ -1,0 +1,62 @@
+import { Logger, type INestApplication } from '@nestjs/common';
+import { NestFactory } from '@nestjs/core';
+import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import helmet from 'helmet';
+import { AppModule } from './app.module';
+import { installJsonBodyParser } from './common/body-parser';
+import { AllExceptionsFilter } from './common/all-exceptions.filter';
+import { loadAppConfig, type AppConfig } from './config/app-config';
+
+/** A configured Upwell app, not yet listening. */
+export interface BuiltApp {
+  app: INestApplication;
+  config: AppConfig;
+}
+
+/**
+ * Builds the app the same way for `npm start`, the tests and the benchmarks:
+ * security headers, JSON parsing with JSON errors, the /api prefix, OpenAPI.
+ */
+export async function buildApp(env: NodeJS.ProcessEnv = process.env, opts: { logger?: false } = {}): Promise<BuiltApp> {
+  const config = loadAppConfig(env);
+  const app = await NestFactory.create(AppModule.forConfig(config), {
+    bodyParser: false,
+    logger: opts.logger === false ? false : ['log', 'warn', 'error'],
+  });
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          // Vega's figures are rendered with its expression interpreter, so no 'unsafe-eval' is needed.
+          'img-src': ["'self'", 'data:', 'blob:'],
+          'connect-src': ["'self'", 'ws:', 'wss:'],
+        },
+      },
+    }),
+  );
+  installJsonBodyParser(app);
+  app.setGlobalPrefix('api', { exclude: [] });
+  app.useGlobalFilters(new AllExceptionsFilter());
+  app.enableShutdownHooks();
+  const doc = SwaggerModule.createDocument(
+    app,
+    new DocumentBuilder()
+      .setTitle('Upwell API')
+      .setDescription('Research groups, notebooks, stored series and the anomaly engine of Upwell.')
+      .setVersion('0.1.0')
+      .addBearerAuth()
+      .build(),
+  );
+  SwaggerModule.setup('api/docs', app, doc, { jsonDocumentUrl: 'api/docs/openapi.json' });
+  return { app, config };
+}
+
+/** Starts the server on the configured port (0 picks a free one) and says where. */
+export async function startApp(env: NodeJS.ProcessEnv = process.env): Promise<BuiltApp & { url: string }> {
+  const built = await buildApp(env);
+  await built.app.listen(built.config.port, '0.0.0.0');
+  const address = built.app.getHttpServer().address() as { port: number };
+  const url = `http://localhost:${address.port}`;
+  new Logger('Upwell').log(`serving ${built.config.webDist ? 'the app and ' : ''}the API at ${url} (data in ${built.config.dataDir})`);
+  return { ...built, url };
+}

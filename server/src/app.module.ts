@@ -1,0 +1,40 @@
+import { SqliteDriver } from '@mikro-orm/sqlite';
+import { MikroOrmModule } from '@mikro-orm/nestjs';
+import { Module, type DynamicModule } from '@nestjs/common';
+import { ConfigModule, ConfigService } from '@nestjs/config';
+import { ServeStaticModule } from '@nestjs/serve-static';
+import { AuthModule } from './auth/auth.module';
+import { APP_CONFIG, type AppConfig } from './config/app-config';
+import { MigrateOnStart } from './database/migrate-on-start';
+import { GroupsModule } from './groups/groups.module';
+import { HealthController } from './health/health.controller';
+import { buildOrmOptions } from './mikro-orm.config';
+import { NotebooksModule } from './notebooks/notebooks.module';
+import { UsersModule } from './users/users.module';
+
+/** The whole server, built for one resolved configuration. */
+@Module({})
+export class AppModule {
+  static forConfig(config: AppConfig): DynamicModule {
+    return {
+      module: AppModule,
+      imports: [
+        ConfigModule.forRoot({ isGlobal: true, ignoreEnvFile: true, load: [() => ({ [APP_CONFIG]: config })] }),
+        MikroOrmModule.forRootAsync({
+          inject: [ConfigService],
+          useFactory: (cfg: ConfigService) => buildOrmOptions(cfg.getOrThrow<AppConfig>(APP_CONFIG).databaseFile),
+          driver: SqliteDriver,
+        }),
+        ...(config.webDist
+          ? [ServeStaticModule.forRoot({ rootPath: config.webDist, exclude: ['/api{/*path}', '/socket.io{/*path}'] })]
+          : []),
+        AuthModule,
+        UsersModule,
+        GroupsModule,
+        NotebooksModule,
+      ],
+      controllers: [HealthController],
+      providers: [MigrateOnStart],
+    };
+  }
+}

@@ -1,0 +1,62 @@
+import { EntityManager } from '@mikro-orm/sqlite';
+import { ConflictException, Injectable, UnauthorizedException } from '@nestjs/common';
+import { JwtService } from '@nestjs/jwt';
+import type { AuthResponse, LoginRequest, RegisterRequest } from '@upwell/common';
+import { User } from '../users/user.entity';
+import { presentUser } from '../users/user.presenter';
+import { hashPassword, verifyPassword } from './password';
+import type { TokenPayload } from './token-payload';
+
+/** Sign-up, sign-in, sign-out and token checks. */
+@Injectable()
+export class AuthService {
+  constructor(
+    private readonly em: EntityManager,
+    private readonly jwt: JwtService,
+  ) {}
+
+  async register(body: RegisterRequest): Promise<AuthResponse> {
+    if (await this.em.count(User, { email: body.email })) {
+      throw new ConflictException('an account with this e-mail already exists; sign in instead');
+    }
+    const user = this.em.create(User, { email: body.email, name: body.name, passwordHash: await hashPassword(body.password) });
+    await this.em.flush();
+    return this.issue(user);
+  }
+
+  async login(body: LoginRequest): Promise<AuthResponse> {
+    const user = await this.em.findOne(User, { email: body.email }, { populate: ['passwordHash'] });
+    // Same answer for an unknown e-mail and a wrong password, so sign-in reveals no accounts.
+    if (!user || !(await verifyPassword(user.passwordHash, body.password))) {
+      throw new UnauthorizedException('the e-mail or the password is wrong');
+    }
+    return this.issue(user);
+  }
+
+  /** Signs out everywhere: every token issued before now stops working. */
+  async logout(user: User): Promise<void> {
+    user.tokenVersion += 1;
+    await this.em.flush();
+  }
+
+  /** The user a verified token speaks for, or null if the token was revoked. */
+  async userForPayload(payload: TokenPayload): Promise<User | null> {
+    if (typeof payload?.sub !== 'string') return null;
+    const user = await this.em.findOne(User, { id: payload.sub });
+    return user && user.tokenVersion === payload.ver ? user : null;
+  }
+
+  /** Verifies a raw token (for socket handshakes) and returns its user or null. */
+  async userForToken(token: string): Promise<User | null> {
+    try {
+      return await this.userForPayload(await this.jwt.verifyAsync<TokenPayload>(token, { algorithms: ['HS256'] }));
+    } catch {
+      return null;
+    }
+  }
+
+  private async issue(user: User): Promise<AuthResponse> {
+    const payload: TokenPayload = { sub: user.id, ver: user.tokenVersion };
+    return { accessToken: await this.jwt.signAsync(payload), user: presentUser(user) };
+  }
+}

@@ -1,0 +1,47 @@
+import { ArgumentsHost, Catch, HttpException, HttpStatus, Logger, type ExceptionFilter } from '@nestjs/common';
+import type { Response } from 'express';
+
+/** The shape of every error the API answers with. */
+export interface ApiError {
+  statusCode: number;
+  error: string;
+  message: string;
+  issues?: { path: string; message: string }[];
+}
+
+/** Builds the JSON error for an HTTP status and whatever was thrown. */
+export function toApiError(status: number, body: unknown): ApiError {
+  const error = (HttpStatus[status] ?? 'Error')
+    .toLowerCase()
+    .split('_')
+    .map((w) => w[0].toUpperCase() + w.slice(1))
+    .join(' ');
+  if (typeof body === 'string') return { statusCode: status, error, message: body };
+  const obj = (body ?? {}) as Record<string, unknown>;
+  const message = Array.isArray(obj.message) ? obj.message.join('; ') : String(obj.message ?? error);
+  const out: ApiError = { statusCode: status, error, message };
+  if (Array.isArray(obj.issues)) out.issues = obj.issues as ApiError['issues'];
+  return out;
+}
+
+/**
+ * Every error leaves as JSON that says what was wrong; an unexpected one is
+ * logged here and answered without its stack, so the server keeps running and
+ * tells nothing of its insides.
+ */
+@Catch()
+export class AllExceptionsFilter implements ExceptionFilter {
+  private readonly logger = new Logger('HTTP');
+
+  catch(exception: unknown, host: ArgumentsHost): void {
+    if (host.getType() !== 'http') throw exception;
+    const res = host.switchToHttp().getResponse<Response>();
+    if (res.headersSent) return;
+    if (exception instanceof HttpException) {
+      res.status(exception.getStatus()).json(toApiError(exception.getStatus(), exception.getResponse()));
+      return;
+    }
+    this.logger.error(exception instanceof Error ? exception.stack ?? exception.message : String(exception));
+    res.status(500).json(toApiError(500, 'something went wrong on the server; the error was logged and nothing you sent was stored half-way'));
+  }
+}

@@ -1,0 +1,64 @@
+import { randomBytes } from 'node:crypto';
+import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { join, resolve } from 'node:path';
+
+/** Settings the server runs with, read once from the environment at start. */
+export interface AppConfig {
+  port: number;
+  /** Folder for the SQLite file, uploads and generated secrets. */
+  dataDir: string;
+  databaseFile: string;
+  jwtSecret: string;
+  /** Lifetime of an access token, in seconds. */
+  jwtTtlSeconds: number;
+  /** Built web client to serve, or null to serve the API alone. */
+  webDist: string | null;
+  /** Sign-in and sign-up attempts allowed per client address per minute. */
+  authAttemptsPerMinute: number;
+}
+
+/** Name under which the config is registered with @nestjs/config. */
+export const APP_CONFIG = 'app';
+
+function positiveInt(name: string, raw: string | undefined, fallback: number): number {
+  if (raw === undefined || raw === '') return fallback;
+  const n = Number(raw);
+  if (!Number.isInteger(n) || n < 0) throw new Error(`${name} must be a whole number, got "${raw}"`);
+  return n;
+}
+
+/**
+ * The JWT signing secret: JWT_SECRET if given, otherwise one generated on first
+ * start and kept in DATA_DIR so tokens survive a restart. Never a constant in
+ * the repository.
+ */
+function jwtSecret(dataDir: string, given: string | undefined): string {
+  if (given) {
+    if (given.length < 32) throw new Error('JWT_SECRET must be at least 32 characters');
+    return given;
+  }
+  const dir = join(dataDir, 'secrets');
+  const file = join(dir, 'jwt-secret');
+  if (existsSync(file)) return readFileSync(file, 'utf8').trim();
+  mkdirSync(dir, { recursive: true, mode: 0o700 });
+  const secret = randomBytes(48).toString('base64url');
+  writeFileSync(file, secret + '\n', { mode: 0o600, flag: 'wx' });
+  return secret;
+}
+
+/** Reads and checks the environment; creates DATA_DIR and the secret if missing. */
+export function loadAppConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
+  const dataDir = resolve(env.DATA_DIR || './data');
+  mkdirSync(dataDir, { recursive: true });
+  const defaultWeb = resolve(__dirname, '../../../web/dist');
+  const webDist = env.WEB_DIST === '' ? null : resolve(env.WEB_DIST || defaultWeb);
+  return {
+    port: positiveInt('PORT', env.PORT, 3000),
+    dataDir,
+    databaseFile: join(dataDir, 'upwell.sqlite'),
+    jwtSecret: jwtSecret(dataDir, env.JWT_SECRET),
+    jwtTtlSeconds: positiveInt('JWT_TTL_SECONDS', env.JWT_TTL_SECONDS, 7 * 24 * 3600),
+    webDist: webDist && existsSync(join(webDist, 'index.html')) ? webDist : null,
+    authAttemptsPerMinute: positiveInt('AUTH_ATTEMPTS_PER_MINUTE', env.AUTH_ATTEMPTS_PER_MINUTE, 20),
+  };
+}

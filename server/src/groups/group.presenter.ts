@@ -1,0 +1,19 @@
+import type { GroupDetail, GroupSummary } from '@upwell/common';
+import { presentUser } from '../users/user.presenter';
+import type { GroupMembership } from './group.entity';
+
+/** A group in a person's list of groups. */
+export function presentGroupSummary(m: GroupMembership): GroupSummary {
+  return { id: m.group.id, name: m.group.name, role: m.role };
+}
+
+/** A group with its members, for the group page. */
+export function presentGroupDetail(mine: GroupMembership, members: GroupMembership[]): GroupDetail {
+  return {
+    id: mine.group.id,
+    name: mine.group.name,
+    createdAt: mine.group.createdAt.toISOString(),
+    role: mine.role,
+    members: members.map((m) => ({ user: presentUser(m.user), role: m.role, since: m.createdAt.toISOString() })),
+  };
+}

@@ -1,0 +1,11 @@
+import type { MigrationObject } from '@mikro-orm/core';
+import { Migration20261201185536 } from './Migration20261201185536';
+
+/**
+ * Every migration, oldest first. Create one with `npm run migration:create -w server`
+ * after `npm run build -w server`, then add it at the end here.
+ */
+export const migrationsList: MigrationObject[] = [
+  // Accounts, research groups with roles, notebooks with per-person roles.
+  { name: 'Migration20261201185536', class: Migration20261201185536 },
+];

@@ -1,0 +1,38 @@
+import { defineConfig, type Options } from '@mikro-orm/sqlite';
+import { Migrator } from '@mikro-orm/migrations';
+import { join, resolve } from 'node:path';
+import { User } from './users/user.entity';
+import { Group, GroupMembership } from './groups/group.entity';
+import { Notebook, NotebookRoleAssignment } from './notebooks/notebook.entity';
+import { migrationsList } from './migrations';
+
+/** Every entity the server stores; new modules add theirs here. */
+export const ENTITIES = [User, Group, GroupMembership, Notebook, NotebookRoleAssignment];
+
+/** MikroORM options for the SQLite file at `databaseFile`. */
+export function buildOrmOptions(databaseFile: string): Options {
+  return defineConfig({
+    dbName: databaseFile,
+    entities: ENTITIES,
+    extensions: [Migrator],
+    // Migrations are listed explicitly so the built server never scans or compiles TypeScript.
+    migrations: { migrationsList, path: join(__dirname, 'migrations'), pathTs: resolve(__dirname, '../src/migrations'), transactional: true, snapshot: false },
+    pool: {
+      // One writer at a time in SQLite: WAL lets readers go on while it writes,
+      // the busy timeout makes a second writer wait instead of failing at once.
+      afterCreate: (conn: { run: (sql: string, cb: (err: Error | null) => void) => void }, done: (err: Error | null, conn: unknown) => void) => {
+        conn.run('PRAGMA journal_mode = WAL', (err) => {
+          if (err) return done(err, conn);
+          conn.run('PRAGMA busy_timeout = 5000', (err2) => {
+            if (err2) return done(err2, conn);
+            conn.run('PRAGMA foreign_keys = ON', (err3) => done(err3, conn));
+          });
+        });
+      },
+    },
+    debug: false,
+  });
+}
+
+// The MikroORM CLI (npm run migration:create -w server) reads this default export.
+export default buildOrmOptions(join(resolve(process.env.DATA_DIR || './data'), 'upwell.sqlite'));

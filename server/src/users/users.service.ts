@@ -1,0 +1,27 @@
+import { EntityManager } from '@mikro-orm/sqlite';
+import { Injectable } from '@nestjs/common';
+import type { MeResponse, UpdateMeRequest } from '@upwell/common';
+import { GroupMembership } from '../groups/group.entity';
+import { User } from './user.entity';
+import { presentUser } from './user.presenter';
+
+/** The signed-in person's own account. */
+@Injectable()
+export class UsersService {
+  constructor(private readonly em: EntityManager) {}
+
+  async me(user: User): Promise<MeResponse> {
+    const memberships = await this.em.find(GroupMembership, { user }, { populate: ['group'], orderBy: { group: { name: 'asc' } } });
+    return {
+      ...presentUser(user),
+      createdAt: user.createdAt.toISOString(),
+      groups: memberships.map((m) => ({ id: m.group.id, name: m.group.name, role: m.role })),
+    };
+  }
+
+  async updateMe(user: User, body: UpdateMeRequest): Promise<MeResponse> {
+    user.name = body.name;
+    await this.em.flush();
+    return this.me(user);
+  }
+}
