@@ -16,7 +16,7 @@ export function buildOrmOptions(databaseFile: string): Options {
     entities: ENTITIES,
     extensions: [Migrator],
     // Migrations are listed explicitly so the built server never scans or compiles TypeScript.
-    migrations: { migrationsList, path: join(__dirname, 'migrations'), pathTs: resolve(__dirname, '../src/migrations'), transactional: true, snapshot: false },
+    migrations: { migrationsList, path: join(__dirname, 'migrations'), pathTs: resolve(__dirname, '../src/migrations'), transactional: true, snapshot: false, silent: true },
     pool: {
       // One writer at a time in SQLite: WAL lets readers go on while it writes,
       // the busy timeout makes a second writer wait instead of failing at once.
