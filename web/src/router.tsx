@@ -1,0 +1,30 @@
+import { createBrowserRouter, Navigate } from 'react-router';
+import { AppShell } from './components/AppShell';
+import AccountPage from './pages/Account';
+import GroupPage from './pages/Group';
+import NotebookPage from './pages/Notebook';
+import NotebooksPage from './pages/Notebooks';
+import SeriesLibraryPage from './pages/SeriesLibrary';
+import SignInPage from './pages/SignIn';
+import SignUpPage from './pages/SignUp';
+
+/** Every screen of the web client. */
+export const routes = [
+  { path: '/sign-in', element: <SignInPage /> },
+  { path: '/sign-up', element: <SignUpPage /> },
+  {
+    path: '/',
+    element: <AppShell />,
+    children: [
+      { index: true, element: <Navigate to="/notebooks" replace /> },
+      { path: 'notebooks', element: <NotebooksPage /> },
+      { path: 'notebooks/:notebookId', element: <NotebookPage /> },
+      { path: 'series', element: <SeriesLibraryPage /> },
+      { path: 'group', element: <GroupPage /> },
+      { path: 'account', element: <AccountPage /> },
+      { path: '*', element: <Navigate to="/notebooks" replace /> },
+    ],
+  },
+];
+
+export const router = createBrowserRouter(routes);
