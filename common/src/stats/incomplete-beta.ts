@@ -1,4 +1,4 @@
-import { logGamma } from './log-gamma';
+import { logBeta } from './log-beta';
 
 const EPS = 1e-16;
 const FPMIN = 1e-300;
@@ -15,7 +15,10 @@ export function incompleteBeta(a: number, b: number, x: number, oneMinusX: numbe
   if (!(a > 0) || !(b > 0) || !(x >= 0) || !(x <= 1)) return NaN;
   if (x === 0) return 0;
   if (oneMinusX === 0) return 1;
-  const lnFront = logGamma(a + b) - logGamma(a) - logGamma(b) + a * Math.log(x) + b * Math.log(oneMinusX);
+  // ln x and ln(1 − x) through log1p of the smaller side, so neither loses digits near 1.
+  const lnX = x < 0.5 ? Math.log(x) : Math.log1p(-oneMinusX);
+  const lnOneMinusX = oneMinusX < 0.5 ? Math.log(oneMinusX) : Math.log1p(-x);
+  const lnFront = a * lnX + b * lnOneMinusX - logBeta(a, b);
   const front = Math.exp(lnFront);
   if (x < (a + 1) / (a + b + 2)) return (front * betaContinuedFraction(a, b, x)) / a;
   return 1 - (front * betaContinuedFraction(b, a, oneMinusX)) / b;

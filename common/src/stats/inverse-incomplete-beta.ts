@@ -1,5 +1,5 @@
 import { incompleteBeta } from './incomplete-beta';
-import { logGamma } from './log-gamma';
+import { logBeta } from './log-beta';
 
 /**
  * The x in [0, 1] with I_x(a, b) = p. Safeguarded Newton iteration (Newton steps with a bisection
@@ -10,7 +10,7 @@ export function inverseIncompleteBeta(p: number, a: number, b: number): number {
   if (!(p >= 0) || !(p <= 1) || !(a > 0) || !(b > 0)) return NaN;
   if (p === 0) return 0;
   if (p === 1) return 1;
-  const lnB = logGamma(a) + logGamma(b) - logGamma(a + b);
+  const lnB = logBeta(a, b);
   let lo = 0;
   let hi = 1;
   let x = 0.5;
