@@ -11,6 +11,8 @@ import { HealthController } from './health/health.controller';
 import { buildOrmOptions } from './mikro-orm.config';
 import { NotebooksModule } from './notebooks/notebooks.module';
 import { UsersModule } from './users/users.module';
+import { RealtimeModule } from './realtime/realtime.module';
+import { SeriesModule } from './series/series.module';
 
 /** The whole server, built for one resolved configuration. */
 @Module({})
@@ -32,6 +34,8 @@ export class AppModule {
         UsersModule,
         GroupsModule,
         NotebooksModule,
+        RealtimeModule,
+        SeriesModule,
       ],
       controllers: [HealthController],
       providers: [MigrateOnStart],

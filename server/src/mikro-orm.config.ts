@@ -4,10 +4,13 @@ import { join, resolve } from 'node:path';
 import { User } from './users/user.entity';
 import { Group, GroupMembership } from './groups/group.entity';
 import { Notebook, NotebookRoleAssignment } from './notebooks/notebook.entity';
+import { Series, SeriesVersion } from './series/series.entity';
+import { UploadedFile } from './uploads/uploaded-file.entity';
+import { GriddedField, ZonalMeanField } from './fields/field.entity';
 import { migrationsList } from './migrations';
 
 /** Every entity the server stores; new modules add theirs here. */
-export const ENTITIES = [User, Group, GroupMembership, Notebook, NotebookRoleAssignment];
+export const ENTITIES = [User, Group, GroupMembership, Notebook, NotebookRoleAssignment, UploadedFile, Series, SeriesVersion, GriddedField, ZonalMeanField];
 
 /** MikroORM options for the SQLite file at `databaseFile`. */
 export function buildOrmOptions(databaseFile: string): Options {

@@ -4,6 +4,7 @@ import AccountPage from './pages/Account';
 import GroupPage from './pages/Group';
 import NotebookPage from './pages/Notebook';
 import NotebooksPage from './pages/Notebooks';
+import SeriesPage from './pages/Series';
 import SeriesLibraryPage from './pages/SeriesLibrary';
 import SignInPage from './pages/SignIn';
 import SignUpPage from './pages/SignUp';
@@ -20,6 +21,7 @@ export const routes = [
       { path: 'notebooks', element: <NotebooksPage /> },
       { path: 'notebooks/:notebookId', element: <NotebookPage /> },
       { path: 'series', element: <SeriesLibraryPage /> },
+      { path: 'series/:seriesId', element: <SeriesPage /> },
       { path: 'group', element: <GroupPage /> },
       { path: 'account', element: <AccountPage /> },
       { path: '*', element: <Navigate to="/notebooks" replace /> },

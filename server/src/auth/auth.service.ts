@@ -40,16 +40,16 @@ export class AuthService {
   }
 
   /** The user a verified token speaks for, or null if the token was revoked. */
-  async userForPayload(payload: TokenPayload): Promise<User | null> {
+  async userForPayload(payload: TokenPayload, em: EntityManager = this.em): Promise<User | null> {
     if (typeof payload?.sub !== 'string') return null;
-    const user = await this.em.findOne(User, { id: payload.sub });
+    const user = await em.findOne(User, { id: payload.sub });
     return user && user.tokenVersion === payload.ver ? user : null;
   }
 
   /** Verifies a raw token (for socket handshakes) and returns its user or null. */
-  async userForToken(token: string): Promise<User | null> {
+  async userForToken(token: string, em: EntityManager = this.em): Promise<User | null> {
     try {
-      return await this.userForPayload(await this.jwt.verifyAsync<TokenPayload>(token, { algorithms: ['HS256'] }));
+      return await this.userForPayload(await this.jwt.verifyAsync<TokenPayload>(token, { algorithms: ['HS256'] }), em);
     } catch {
       return null;
     }

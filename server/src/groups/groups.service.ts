@@ -2,6 +2,7 @@ import { EntityManager } from '@mikro-orm/sqlite';
 import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import type { AddMemberRequest, ChangeMemberRoleRequest, CreateGroupRequest, GroupDetail, GroupSummary } from '@upwell/common';
 import { Notebook, NotebookRoleAssignment } from '../notebooks/notebook.entity';
+import { RealtimeEvents } from '../realtime/realtime-events';
 import { User } from '../users/user.entity';
 import { Group, GroupMembership } from './group.entity';
 import { GroupPolicy } from './group.policy';
@@ -13,6 +14,7 @@ export class GroupsService {
   constructor(
     private readonly em: EntityManager,
     private readonly policy: GroupPolicy,
+    private readonly events: RealtimeEvents,
   ) {}
 
   async listMine(user: User): Promise<GroupSummary[]> {
@@ -50,6 +52,7 @@ export class GroupsService {
     }
     this.em.create(GroupMembership, { group: mine.group, user: person, role: body.role });
     await this.em.flush();
+    await this.events.setGroupMembership(person.id, groupId, true);
     return presentGroupDetail(mine, await this.members(groupId));
   }
 
@@ -81,6 +84,8 @@ export class GroupsService {
       await em.nativeDelete(NotebookRoleAssignment, { user: userId, notebook: { group: groupId } });
       await em.nativeDelete(GroupMembership, { id: target.id });
     });
+    // Access removed while connected takes effect at once: their sockets leave the group's room.
+    await this.events.setGroupMembership(userId, groupId, false);
   }
 
   private members(groupId: string): Promise<GroupMembership[]> {

@@ -1,5 +1,6 @@
 import type { MigrationObject } from '@mikro-orm/core';
 import { Migration20261201185536 } from './Migration20261201185536';
+import { Migration20261201190750 } from './Migration20261201190750';
 
 /**
  * Every migration, oldest first. Create one with `npm run migration:create -w server`
@@ -8,4 +9,6 @@ import { Migration20261201185536 } from './Migration20261201185536';
 export const migrationsList: MigrationObject[] = [
   // Accounts, research groups with roles, notebooks with per-person roles.
   { name: 'Migration20261201185536', class: Migration20261201185536 },
+  // The series library: uploaded files, series with versions, gridded and zonal-mean fields.
+  { name: 'Migration20261201190750', class: Migration20261201190750 },
 ];
