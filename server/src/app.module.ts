@@ -3,6 +3,7 @@ import { MikroOrmModule } from '@mikro-orm/nestjs';
 import { Module, type DynamicModule } from '@nestjs/common';
 import { ConfigModule, ConfigService } from '@nestjs/config';
 import { ServeStaticModule } from '@nestjs/serve-static';
+import { AnalysisModule } from './analysis/analysis.module';
 import { AuthModule } from './auth/auth.module';
 import { APP_CONFIG, type AppConfig } from './config/app-config';
 import { MigrateOnStart } from './database/migrate-on-start';
@@ -13,6 +14,7 @@ import { NotebooksModule } from './notebooks/notebooks.module';
 import { UsersModule } from './users/users.module';
 import { RealtimeModule } from './realtime/realtime.module';
 import { SeriesModule } from './series/series.module';
+import { UploadsModule } from './uploads/uploads.module';
 
 /** The whole server, built for one resolved configuration. */
 @Module({})
@@ -36,6 +38,8 @@ export class AppModule {
         NotebooksModule,
         RealtimeModule,
         SeriesModule,
+        AnalysisModule,
+        UploadsModule,
       ],
       controllers: [HealthController],
       providers: [MigrateOnStart],

@@ -15,6 +15,8 @@ export interface AppConfig {
   webDist: string | null;
   /** Sign-in and sign-up attempts allowed per client address per minute. */
   authAttemptsPerMinute: number;
+  /** Largest upload accepted, in bytes (streamed to disk, never held in memory). */
+  uploadMaxBytes: number;
 }
 
 /** Name under which the config is registered with @nestjs/config. */
@@ -60,5 +62,6 @@ export function loadAppConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     jwtTtlSeconds: positiveInt('JWT_TTL_SECONDS', env.JWT_TTL_SECONDS, 7 * 24 * 3600),
     webDist: webDist && existsSync(join(webDist, 'index.html')) ? webDist : null,
     authAttemptsPerMinute: positiveInt('AUTH_ATTEMPTS_PER_MINUTE', env.AUTH_ATTEMPTS_PER_MINUTE, 20),
+    uploadMaxBytes: positiveInt('UPLOAD_MAX_BYTES', env.UPLOAD_MAX_BYTES, 2 * 1024 ** 3),
   };
 }

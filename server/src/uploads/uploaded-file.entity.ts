@@ -13,7 +13,7 @@ export type UploadFormat = (typeof UPLOAD_FORMATS)[number];
  */
 @Entity({ tableName: 'uploaded_files' })
 export class UploadedFile {
-  [OptionalProps]?: 'createdAt' | 'importedAt';
+  [OptionalProps]?: 'createdAt' | 'importedAt' | 'options';
 
   @PrimaryKey({ type: 'string', length: 36 })
   id: string = randomUUID();
@@ -37,6 +37,10 @@ export class UploadedFile {
   /** Path relative to DATA_DIR. */
   @Property({ type: 'string', length: 255 })
   storedPath!: string;
+
+  /** The reading options the preview used, so the import reads the file the same way. */
+  @Property({ type: 'json', nullable: true })
+  options: Record<string, unknown> | null = null;
 
   @ManyToOne(() => User)
   uploadedBy!: User;

@@ -1,0 +1,30 @@
+import { Module } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import { MulterModule } from '@nestjs/platform-express';
+import { join } from 'node:path';
+import { APP_CONFIG, type AppConfig } from '../config/app-config';
+import { GroupsModule } from '../groups/groups.module';
+import { SeriesModule } from '../series/series.module';
+import { hashingDiskStorage } from './hashing-disk-storage';
+import { UploadsController } from './uploads.controller';
+import { UploadsService } from './uploads.service';
+
+@Module({
+  imports: [
+    GroupsModule,
+    SeriesModule,
+    MulterModule.registerAsync({
+      inject: [ConfigService],
+      useFactory: (config: ConfigService) => {
+        const app = config.getOrThrow<AppConfig>(APP_CONFIG);
+        return {
+          storage: hashingDiskStorage(join(app.dataDir, 'uploads', 'tmp')),
+          limits: { fileSize: app.uploadMaxBytes, files: 1, fields: 5, fieldSize: 64 * 1024, parts: 8 },
+        };
+      },
+    }),
+  ],
+  controllers: [UploadsController],
+  providers: [UploadsService],
+})
+export class UploadsModule {}
