@@ -2,3 +2,4 @@ export * from './limits';
 export * from './auth';
 export * from './groups';
 export * from './notebooks';
+export * from './series-import';
