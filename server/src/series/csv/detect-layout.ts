@@ -1,7 +1,7 @@
 import type { CsvDateFormat } from '@upwell/common';
 import { CsvImportError } from './csv-import-error';
 import { guessDateFormat, readMonth, readMonthOfYear, readYear } from './parse-month';
-import type { CellValue } from './parse-number';
+import { looksDecimalComma, looksDecimalPoint, type CellValue } from './parse-number';
 
 /** How rows turn into months: the long layout reads one date per row, the wide layout one year of 12 months. */
 export type LayoutPlan =
@@ -94,7 +94,7 @@ function findDateColumns(input: LayoutInput): { format: CsvDateFormat; dateColum
     const format = dateFormatOf(input, i);
     if (format) return { format, dateColumns: [i] };
   }
-  const yearsOnly = names.findIndex((_, i) => sampleOf(input, i).every((c) => readYear(c) !== null));
+  const yearsOnly = names.findIndex((_, i) => mostly(sampleOf(input, i), (c) => readYear(c) !== null));
   if (yearsOnly >= 0 && input.sample.length > 0) {
     throw new CsvImportError(
       'no-date-column',
@@ -127,19 +127,28 @@ function rank({ names }: LayoutInput, i: number): number {
 }
 
 /**
- * The date format all sample cells of a column share, or null. A decimal year is accepted only in the first
- * column or a column named like a time axis, and not when every value is whole: a column of DIC near
- * 2050 µmol/kg must not pass for years.
+ * The date format of a column, judged from its first sample cell and confirmed by all but one in ten of the sample, or null.
+ * Most, not all: a single unreadable date further down should be reported with its line by the row reader,
+ * not make the whole column unrecognisable. A decimal year is accepted only in the first column or a column
+ * named like a time axis, and not when every value is whole: a column of DIC near 2050 µmol/kg must not pass
+ * for years.
  */
 function dateFormatOf(input: LayoutInput, i: number, forced = false): Exclude<CsvDateFormat, 'year+month'> | null {
   const cells = sampleOf(input, i);
   if (cells.length === 0) return null;
   const format = guessDateFormat(cells[0]);
-  if (format && cells.every((c) => readMonth(c, format) !== null)) return format;
+  if (format && mostly(cells, (c) => readMonth(c, format) !== null)) return format;
   const decimalAllowed = forced || i === 0 || TIME_NAME.test(input.names[i]);
-  const decimals = cells.every((c) => readMonth(c, 'decimal-year') !== null);
+  if (!decimalAllowed || readMonth(cells[0], 'decimal-year') === null) return null;
+  const decimals = mostly(cells, (c) => readMonth(c, 'decimal-year') !== null);
   const fractional = cells.some((c) => /[.,]\d*[1-9]/.test(c));
-  return decimalAllowed && decimals && fractional ? 'decimal-year' : null;
+  return decimals && fractional ? 'decimal-year' : null;
+}
+
+/** True when all cells pass but at most one in ten (and at least one may always fail). */
+function mostly(cells: string[], test: (cell: string) => boolean): boolean {
+  const failing = cells.length - cells.filter(test).length;
+  return failing <= Math.max(1, Math.floor(cells.length / 10));
 }
 
 function yearMonthPair(input: LayoutInput): boolean {
@@ -148,9 +157,15 @@ function yearMonthPair(input: LayoutInput): boolean {
   return years.length > 0 && years.every((c) => readYear(c) !== null) && months.every((c) => readMonthOfYear(c) !== null);
 }
 
+/**
+ * Text only (flags, labels). Cells that are numbers written with the other decimal separator do not count as
+ * text, so that the row reader reports them with a hint instead of the column silently disappearing.
+ */
 function isTextColumn(input: LayoutInput, i: number): boolean {
-  const kinds = input.sample.map((r) => input.readCell(r[i] ?? '').kind);
-  return kinds.includes('text') && !kinds.includes('value');
+  const cells = input.sample.map((r) => r[i] ?? '');
+  const kinds = cells.map((c) => input.readCell(c).kind);
+  const misWritten = cells.some((c) => looksDecimalComma(c) || looksDecimalPoint(c));
+  return kinds.includes('text') && !kinds.includes('value') && !misWritten;
 }
 
 /** Non-empty sample cells of a column. */
