@@ -45,7 +45,8 @@ export async function openText(input: string | Readable, maxBytes: number): Prom
 }
 
 async function* stringChunks(text: string): AsyncIterable<string> {
-  const size = 1 << 20;
+  // Small slices keep the sniffed head (and its tokens) small even for a large string.
+  const size = 64 * 1024;
   for (let i = 0; i < text.length; i += size) yield text.slice(i, i + size);
 }
 
