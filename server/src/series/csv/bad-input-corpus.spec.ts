@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import type { CsvImportPreview } from '@upwell/common';
+import { csvImportPreviewSchema, type CsvImportPreview } from '@upwell/common';
 import { CsvImportError, type CsvImportErrorCode } from './csv-import-error';
 import { parseCsvForImport, type ParseCsvOptions } from './parse-csv-for-import';
 
@@ -95,7 +95,10 @@ describe('parseCsvForImport() over the bad-input corpus', () => {
     const { Readable } = await import('node:stream');
     const attempt = parseCsvForImport(Readable.from([bytes]), options);
     if (ok) {
-      ok(await attempt);
+      const preview = await attempt;
+      // What the upload route answers must pass the shared schema the client reads it with.
+      expect(csvImportPreviewSchema.safeParse(preview).success).toBe(true);
+      ok(preview);
       return;
     }
     const thrown = await attempt.then(

@@ -1,7 +1,7 @@
 import { createReadStream, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { WIDE_LAYOUT_COLUMN } from '@upwell/common';
+import { WIDE_LAYOUT_COLUMN, csvImportPreviewSchema } from '@upwell/common';
 import { CsvImportError } from './csv-import-error';
 import { parseCsvForImport } from './parse-csv-for-import';
 
@@ -23,6 +23,7 @@ describe('parseCsvForImport() on the statsmodels Niño 1+2 table (wide layout)',
     expect(p.series).toHaveLength(1);
     expect(p.series[0]).toMatchObject({ column: WIDE_LAYOUT_COLUMN, start: '1950-01', missingCount: 0, suggestedName: 'elnino-nino12-wide' });
     expect(p.series[0].values).toHaveLength(61 * 12);
+    expect(csvImportPreviewSchema.parse(p)).toEqual(p);
   });
 
   it('reads 1983-03 = 28.85 and 1998-03 = 29.24, as lines 35 and 50 of the file say', async () => {
@@ -159,6 +160,23 @@ describe('parseCsvForImport() options', () => {
       ['1997-01', [1, 2, 3]],
       ['1997-03', [7]],
     ]);
+  });
+
+  it('fills a single skipped month with null and warns about it', async () => {
+    const p = await parseCsvForImport('date,x\n1997-01,1\n1997-03,3\n');
+    expect(p.series[0]).toMatchObject({ values: [1, null, 3], missingCount: 1 });
+    expect(p.warnings).toEqual([
+      { code: 'skipped-months', line: 3, message: 'line 3: no rows for 1997-02 (between lines 2 and 3); those months are left empty' },
+    ]);
+  });
+
+  it('fills a skipped year of a wide table with 12 nulls and names the year', async () => {
+    const row = (y: number) => `${y},${Array.from({ length: 12 }, (_, m) => m + 1).join(',')}`;
+    const p = await parseCsvForImport(['YEAR,JAN,FEB,MAR,APR,MAY,JUN,JUL,AUG,SEP,OCT,NOV,DEC', row(2001), row(2003)].join('\n'));
+    expect(p.series[0].values).toHaveLength(36);
+    expect(p.series[0].values.slice(12, 24)).toEqual(Array(12).fill(null));
+    expect(p.series[0].missingCount).toBe(12);
+    expect(p.warnings[0].message).toContain('no rows for 2002 (between lines 2 and 3)');
   });
 
   it('caps warnings and says how many were left out', async () => {
