@@ -3,3 +3,5 @@ export * from './auth';
 export * from './groups';
 export * from './notebooks';
 export * from './series';
+export * from './series-import';
+export * from './uploads';
