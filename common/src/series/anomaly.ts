@@ -11,7 +11,7 @@ import { toNullable } from './to-nullable';
 import type { MonthlySeries } from './types';
 
 /** Options of anomaly(): the body of POST /api/analysis/anomaly. */
-export interface AnomalyRequest {
+export interface AnomalyInput {
   series: MonthlySeries;
   base: { from: string; to: string };
   method?: 'monthly-mean' | 'harmonic';
@@ -23,7 +23,7 @@ export interface AnomalyRequest {
 }
 
 /** Result of anomaly(). climatology holds 12 values, January first, in the series' units. */
-export interface AnomalyResponse {
+export interface AnomalyOutput {
   anomaly: { start: string; values: (number | null)[] };
   climatology: (number | null)[];
   warnings: string[];
@@ -37,7 +37,7 @@ export interface AnomalyResponse {
  * error: the minimum-years rule then leaves months null and `warnings` says why. Only a base
  * period that ends before it starts is rejected (AnalysisInputError).
  */
-export function anomaly(req: AnomalyRequest): AnomalyResponse {
+export function anomaly(req: AnomalyInput): AnomalyOutput {
   const start = parseMonth(req.series.start);
   const baseFrom = parseMonth(req.base.from);
   const baseTo = parseMonth(req.base.to);
@@ -55,7 +55,7 @@ export function anomaly(req: AnomalyRequest): AnomalyResponse {
   const clim =
     req.method === 'harmonic' ? harmonicClimatology(stats, req.harmonics ?? 2) : monthlyClimatology(stats, req.minYears);
   warnings.push(...clim.warnings);
-  let a = new Float64Array(x.length);
+  let a: Float64Array = new Float64Array(x.length);
   let cal = start % 12;
   for (let i = 0; i < x.length; i++) {
     a[i] = x[i] - clim.climatology[cal];

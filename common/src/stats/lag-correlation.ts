@@ -8,7 +8,7 @@ import { prepareForCorrelation } from './prepare-for-correlation';
 import { averageRanks } from './rank';
 
 /** Body of POST /api/analysis/lag-correlation. */
-export interface LagCorrelationRequest {
+export interface LagCorrelationInput {
   x: MonthlySeries;
   y: MonthlySeries;
   maxLag: number;
@@ -25,7 +25,7 @@ export interface LagCorrelationRow {
 }
 
 /** Result of lagCorrelation(): every lag from −maxLag to +maxLag. */
-export interface LagCorrelationResponse {
+export interface LagCorrelationOutput {
   lags: LagCorrelationRow[];
 }
 
@@ -37,7 +37,7 @@ export interface LagCorrelationResponse {
  * Spearman ranks the paired values of each lag (average ranks for ties) and applies the same
  * machinery, nEff included, to the ranks. A lag longer than the overlap gives n = 0 and nulls.
  */
-export function lagCorrelation(req: LagCorrelationRequest): LagCorrelationResponse {
+export function lagCorrelation(req: LagCorrelationInput): LagCorrelationOutput {
   const xs = toFloat64(req.x.values);
   const ys = toFloat64(req.y.values);
   const d = parseMonth(req.y.start) - parseMonth(req.x.start);
