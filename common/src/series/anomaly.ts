@@ -6,9 +6,13 @@ import { detrend as removeTrend } from './detrend';
 import { formatMonth, parseMonth } from './month';
 import { runningMean } from './running-mean';
 import { standardizeByMonth } from './standardize-by-month';
-import { toFloat64 } from './to-float64';
+import { scratchFloat64, scratchSlot } from '../stats/scratch';
+import { toFloat64Into } from './to-float64';
 import { toNullable } from './to-nullable';
 import type { MonthlySeries } from './types';
+
+// The input as doubles lives in a reused buffer: it never leaves anomaly() (results are new arrays).
+const X_SLOT = scratchSlot();
 
 /** Options of anomaly(): the body of POST /api/analysis/anomaly. */
 export interface AnomalyInput {
@@ -42,7 +46,7 @@ export function anomaly(req: AnomalyInput): AnomalyOutput {
   const baseFrom = parseMonth(req.base.from);
   const baseTo = parseMonth(req.base.to);
   if (baseTo < baseFrom) throw new AnalysisInputError(`base period ends (${req.base.to}) before it starts (${req.base.from})`);
-  const x = toFloat64(req.series.values);
+  const x = toFloat64Into(req.series.values, scratchFloat64(X_SLOT, req.series.values.length));
   const warnings: string[] = [];
   const end = start + x.length - 1;
   if (x.length === 0) warnings.push('series is empty');
@@ -55,6 +59,11 @@ export function anomaly(req: AnomalyInput): AnomalyOutput {
   const clim =
     req.method === 'harmonic' ? harmonicClimatology(stats, req.harmonics ?? 2) : monthlyClimatology(stats, req.minYears);
   warnings.push(...clim.warnings);
+  const steps = req.detrend || req.standardize || (req.smooth !== undefined && req.smooth > 1);
+  if (!steps) {
+    // Plain anomalies straight into the JSON-ready array: one pass, no intermediate copy.
+    return { anomaly: { start: req.series.start, values: subtractInto(x, start, clim.climatology) }, climatology: toNullable(clim.climatology), warnings };
+  }
   let a: Float64Array = new Float64Array(x.length);
   let cal = start % 12;
   for (let i = 0; i < x.length; i++) {
@@ -77,4 +86,16 @@ export function anomaly(req: AnomalyInput): AnomalyOutput {
     climatology: toNullable(clim.climatology),
     warnings,
   };
+}
+
+/** x − climatology[calendar month], missing (NaN) written as null. */
+function subtractInto(x: Float64Array, start: number, climatology: number[]): (number | null)[] {
+  const out: (number | null)[] = [];
+  let cal = start % 12;
+  for (let i = 0; i < x.length; i++) {
+    const v = x[i] - climatology[cal];
+    out.push(v === v ? v : null);
+    cal = cal === 11 ? 0 : cal + 1;
+  }
+  return out;
 }
