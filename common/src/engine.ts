@@ -42,6 +42,8 @@ export * from './stats/effective-sample-size';
 export * from './stats/significance-threshold';
 export * from './stats/prng';
 export * from './stats/lag-correlation';
+export * from './stats/dft';
+export * from './stats/ebisuzaki';
 // ENSO events
 export * from './events/round-half-away';
 export * from './events/strength';

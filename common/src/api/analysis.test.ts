@@ -11,7 +11,7 @@ import {
   integrateRequestSchema,
   lagCorrelationRequestSchema,
   runComposite,
-  seriesSchema,
+  monthlySeriesSchema,
   trendRequestSchema,
 } from './analysis';
 
@@ -44,9 +44,9 @@ describe('analysis routes', () => {
 
 describe('request schemas reject bad input with a message', () => {
   it('a month not written YYYY-MM, or a value that is not a number or null', () => {
-    expect(seriesSchema.safeParse({ start: '1997-13', values: [] }).success).toBe(false);
-    expect(seriesSchema.safeParse({ start: '1997-01', values: ['1'] }).success).toBe(false);
-    expect(seriesSchema.safeParse({ start: '1997-01', values: [1, null] }).success).toBe(true);
+    expect(monthlySeriesSchema.safeParse({ start: '1997-13', values: [] }).success).toBe(false);
+    expect(monthlySeriesSchema.safeParse({ start: '1997-01', values: ['1'] }).success).toBe(false);
+    expect(monthlySeriesSchema.safeParse({ start: '1997-01', values: [1, null] }).success).toBe(true);
   });
 
   it('anomaly: a base period that ends before it starts, an even smooth, too many harmonics', () => {

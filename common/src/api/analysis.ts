@@ -33,11 +33,11 @@ export const MAX_ROUND_DECIMALS = 6;
 export const MAX_ANOMALY_HARMONICS = MAX_HARMONICS;
 
 /** A calendar month "YYYY-MM". */
-export const monthSchema = z.string().regex(/^\d{4}-(0[1-9]|1[0-2])$/, 'a month must be written YYYY-MM');
+export const yearMonthSchema = z.string().regex(/^\d{4}-(0[1-9]|1[0-2])$/, 'a month must be written YYYY-MM');
 
 /** A monthly series: consecutive months from start; null = missing (JSON has no NaN). */
-export const seriesSchema = z.object({
-  start: monthSchema,
+export const monthlySeriesSchema = z.object({
+  start: yearMonthSchema,
   values: z.array(z.number().nullable()).max(MAX_SERIES_MONTHS),
 });
 
@@ -52,9 +52,9 @@ const nullableNumber = z.number().nullable();
 // ── anomaly ──────────────────────────────────────────────────────────────────────────────
 /** Body of POST /api/analysis/anomaly. */
 export const anomalyRequestSchema = z.object({
-  series: seriesSchema,
+  series: monthlySeriesSchema,
   base: z
-    .object({ from: monthSchema, to: monthSchema })
+    .object({ from: yearMonthSchema, to: yearMonthSchema })
     .refine((b) => b.from <= b.to, 'base.from must not be after base.to'),
   method: z.enum(['monthly-mean', 'harmonic']).optional(),
   harmonics: z.number().int().min(0).max(MAX_HARMONICS).optional(),
@@ -65,7 +65,7 @@ export const anomalyRequestSchema = z.object({
 });
 /** Response of POST /api/analysis/anomaly. */
 export const anomalyResponseSchema = z.object({
-  anomaly: seriesSchema,
+  anomaly: monthlySeriesSchema,
   climatology: z.array(nullableNumber).length(12),
   warnings: z.array(z.string()),
 });
@@ -79,8 +79,8 @@ export function runAnomaly(body: AnomalyRequest): AnomalyResponse {
 // ── lag-correlation ──────────────────────────────────────────────────────────────────────
 /** Body of POST /api/analysis/lag-correlation. */
 export const lagCorrelationRequestSchema = z.object({
-  x: seriesSchema,
-  y: seriesSchema,
+  x: monthlySeriesSchema,
+  y: monthlySeriesSchema,
   maxLag: z.number().int().min(0).max(MAX_LAG_MONTHS),
   method: z.enum(['pearson', 'spearman']).optional(),
 });
@@ -98,7 +98,7 @@ export function runLagCorrelation(body: LagCorrelationRequest): LagCorrelationRe
 // ── events ───────────────────────────────────────────────────────────────────────────────
 /** Body of POST /api/analysis/events. */
 export const eventsRequestSchema = z.object({
-  index: seriesSchema,
+  index: monthlySeriesSchema,
   threshold: z.number().positive().optional(),
   minDuration: z.number().int().min(1).max(MAX_SERIES_MONTHS).optional(),
   smooth: oddWidth.optional(),
@@ -109,9 +109,9 @@ export const eventsResponseSchema = z.object({
   events: z.array(
     z.object({
       phase: z.enum(['warm', 'cold']),
-      start: monthSchema,
-      end: monthSchema,
-      peak: monthSchema,
+      start: yearMonthSchema,
+      end: yearMonthSchema,
+      peak: yearMonthSchema,
       peakValue: z.number(),
       months: z.number().int(),
       strength: z.enum(['weak', 'moderate', 'strong', 'very strong']),
@@ -128,9 +128,9 @@ export function runEvents(body: EventsRequest): EventsResponse {
 // ── composite ────────────────────────────────────────────────────────────────────────────
 /** Body of POST /api/analysis/composite; event months must be strictly increasing. */
 export const compositeRequestSchema = z.object({
-  series: seriesSchema,
+  series: monthlySeriesSchema,
   events: z
-    .array(z.object({ at: monthSchema }))
+    .array(z.object({ at: yearMonthSchema }))
     .max(MAX_COMPOSITE_EVENTS)
     .superRefine((events, ctx) => {
       for (let i = 1; i < events.length; i++) {
@@ -165,7 +165,7 @@ export function runComposite(body: CompositeRequest): CompositeResponse {
 
 // ── trend ────────────────────────────────────────────────────────────────────────────────
 /** Body of POST /api/analysis/trend. */
-export const trendRequestSchema = z.object({ series: seriesSchema, per: z.enum(['year', 'decade']).optional() });
+export const trendRequestSchema = z.object({ series: monthlySeriesSchema, per: z.enum(['year', 'decade']).optional() });
 /** Response of POST /api/analysis/trend. */
 export const trendResponseSchema = z.object({
   slope: nullableNumber,
@@ -184,16 +184,16 @@ export function runTrend(body: TrendRequest): TrendResponse {
 // ── budget ───────────────────────────────────────────────────────────────────────────────
 /** Body of POST /api/analysis/budget: at least one named term. */
 export const budgetRequestSchema = z.object({
-  tendency: seriesSchema,
+  tendency: monthlySeriesSchema,
   terms: z
-    .record(z.string().min(1).max(64), seriesSchema)
+    .record(z.string().min(1).max(64), monthlySeriesSchema)
     .refine((t) => Object.keys(t).length >= 1, 'a budget needs at least one term')
     .refine((t) => Object.keys(t).length <= MAX_BUDGET_TERMS, `a budget has at most ${MAX_BUDGET_TERMS} terms`),
 });
 /** Response of POST /api/analysis/budget. */
 export const budgetResponseSchema = z.object({
-  sumOfTerms: seriesSchema,
-  residual: seriesSchema,
+  sumOfTerms: monthlySeriesSchema,
+  residual: monthlySeriesSchema,
   rmsResidual: nullableNumber,
   relativeResidual: nullableNumber,
 });
@@ -207,7 +207,7 @@ export function runBudget(body: BudgetRequest): BudgetResponse {
 // ── integrate ────────────────────────────────────────────────────────────────────────────
 /** Body of POST /api/analysis/integrate. */
 export const integrateRequestSchema = z
-  .object({ series: seriesSchema, units: z.string().min(1).max(64), from: monthSchema, to: monthSchema })
+  .object({ series: monthlySeriesSchema, units: z.string().min(1).max(64), from: yearMonthSchema, to: yearMonthSchema })
   .refine((b) => b.from <= b.to, { message: 'from must not be after to', path: ['to'] });
 /** Response of POST /api/analysis/integrate. */
 export const integrateResponseSchema = z.object({ total: z.number(), units: z.string() });
