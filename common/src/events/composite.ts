@@ -6,7 +6,7 @@ import type { MonthlySeries } from '../series/types';
 import { studentTQuantile } from '../stats/student-t';
 
 /** Body of POST /api/analysis/composite: a series, the event months, and the window around them. */
-export interface CompositeRequest {
+export interface CompositeInput {
   series: MonthlySeries;
   events: { at: string }[];
   before: number;
@@ -15,7 +15,7 @@ export interface CompositeRequest {
 }
 
 /** Composite (superposed epoch) of the series around the events, per offset in months. */
-export interface CompositeResponse {
+export interface CompositeOutput {
   offsets: number[];
   mean: (number | null)[];
   lower: (number | null)[];
@@ -31,7 +31,7 @@ export interface CompositeResponse {
  * null where n < 2. Event months must be strictly increasing (sorted, no duplicates): anything else
  * is an AnalysisInputError, since a duplicate would silently weigh one event twice.
  */
-export function composite(req: CompositeRequest): CompositeResponse {
+export function composite(req: CompositeInput): CompositeOutput {
   const conf = req.confidence ?? 0.95;
   const start = parseMonth(req.series.start);
   const x = toFloat64(req.series.values);

@@ -6,7 +6,7 @@ import { roundHalfAway } from './round-half-away';
 import { eventStrength, type EventStrength } from './strength';
 
 /** Body of POST /api/analysis/events. */
-export interface EventsRequest {
+export interface EventsInput {
   index: MonthlySeries;
   threshold?: number;
   minDuration?: number;
@@ -26,7 +26,7 @@ export interface EnsoEvent {
 }
 
 /** Result of detectEvents(), in time order. */
-export interface EventsResponse {
+export interface EventsOutput {
   events: EnsoEvent[];
 }
 
@@ -39,7 +39,7 @@ export interface EventsResponse {
  * is; the peak (largest |value|, first on ties, judged on unrounded values) reports the unrounded
  * smoothed value. strength follows eventStrength (common practice).
  */
-export function detectEvents(req: EventsRequest): EventsResponse {
+export function detectEvents(req: EventsInput): EventsOutput {
   const threshold = req.threshold ?? 0.5;
   const minDuration = req.minDuration ?? 5;
   const start = parseMonth(req.index.start);

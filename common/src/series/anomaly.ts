@@ -6,12 +6,16 @@ import { detrend as removeTrend } from './detrend';
 import { formatMonth, parseMonth } from './month';
 import { runningMean } from './running-mean';
 import { standardizeByMonth } from './standardize-by-month';
-import { toFloat64 } from './to-float64';
+import { scratchFloat64, scratchSlot } from '../stats/scratch';
+import { toFloat64Into } from './to-float64';
 import { toNullable } from './to-nullable';
 import type { MonthlySeries } from './types';
 
+// The input as doubles lives in a reused buffer: it never leaves anomaly() (results are new arrays).
+const X_SLOT = scratchSlot();
+
 /** Options of anomaly(): the body of POST /api/analysis/anomaly. */
-export interface AnomalyRequest {
+export interface AnomalyInput {
   series: MonthlySeries;
   base: { from: string; to: string };
   method?: 'monthly-mean' | 'harmonic';
@@ -23,7 +27,7 @@ export interface AnomalyRequest {
 }
 
 /** Result of anomaly(). climatology holds 12 values, January first, in the series' units. */
-export interface AnomalyResponse {
+export interface AnomalyOutput {
   anomaly: { start: string; values: (number | null)[] };
   climatology: (number | null)[];
   warnings: string[];
@@ -37,12 +41,12 @@ export interface AnomalyResponse {
  * error: the minimum-years rule then leaves months null and `warnings` says why. Only a base
  * period that ends before it starts is rejected (AnalysisInputError).
  */
-export function anomaly(req: AnomalyRequest): AnomalyResponse {
+export function anomaly(req: AnomalyInput): AnomalyOutput {
   const start = parseMonth(req.series.start);
   const baseFrom = parseMonth(req.base.from);
   const baseTo = parseMonth(req.base.to);
   if (baseTo < baseFrom) throw new AnalysisInputError(`base period ends (${req.base.to}) before it starts (${req.base.from})`);
-  const x = toFloat64(req.series.values);
+  const x = toFloat64Into(req.series.values, scratchFloat64(X_SLOT, req.series.values.length));
   const warnings: string[] = [];
   const end = start + x.length - 1;
   if (x.length === 0) warnings.push('series is empty');
@@ -55,7 +59,12 @@ export function anomaly(req: AnomalyRequest): AnomalyResponse {
   const clim =
     req.method === 'harmonic' ? harmonicClimatology(stats, req.harmonics ?? 2) : monthlyClimatology(stats, req.minYears);
   warnings.push(...clim.warnings);
-  let a = new Float64Array(x.length);
+  const steps = req.detrend || req.standardize || (req.smooth !== undefined && req.smooth > 1);
+  if (!steps) {
+    // Plain anomalies straight into the JSON-ready array: one pass, no intermediate copy.
+    return { anomaly: { start: req.series.start, values: subtractInto(x, start, clim.climatology) }, climatology: toNullable(clim.climatology), warnings };
+  }
+  let a: Float64Array = new Float64Array(x.length);
   let cal = start % 12;
   for (let i = 0; i < x.length; i++) {
     a[i] = x[i] - clim.climatology[cal];
@@ -77,4 +86,16 @@ export function anomaly(req: AnomalyRequest): AnomalyResponse {
     climatology: toNullable(clim.climatology),
     warnings,
   };
+}
+
+/** x − climatology[calendar month], missing (NaN) written as null. */
+function subtractInto(x: Float64Array, start: number, climatology: number[]): (number | null)[] {
+  const out: (number | null)[] = [];
+  let cal = start % 12;
+  for (let i = 0; i < x.length; i++) {
+    const v = x[i] - climatology[cal];
+    out.push(v === v ? v : null);
+    cal = cal === 11 ? 0 : cal + 1;
+  }
+  return out;
 }

@@ -1,11 +1,11 @@
 /** Per-calendar-month tallies over a base period (index 0 = January). */
 export interface BaseMonthStats {
   /** Compensated sum of the present values of each calendar month inside the base period. */
-  sum: Float64Array;
+  sum: number[];
   /** Number of present values of each calendar month inside the base period. */
-  count: Int32Array;
+  count: number[];
   /** How often each calendar month occurs in the base period, present or not (its "years"). */
-  occurrences: Int32Array;
+  occurrences: number[];
 }
 
 /**
@@ -16,11 +16,15 @@ export interface BaseMonthStats {
  * Neumaier-compensated sums (Neumaier 1974) keep 1e8-offset data exact.
  */
 export function baseMonthStats(x: Float64Array, start: number, baseFrom: number, baseTo: number): BaseMonthStats {
-  const sum = new Float64Array(12);
-  const comp = new Float64Array(12);
-  const count = new Int32Array(12);
-  const occurrences = new Int32Array(12);
-  for (let m = baseFrom; m <= baseTo; m++) occurrences[m % 12]++;
+  // Plain arrays: twelve-slot typed arrays cost more to allocate than the whole tally.
+  const sum = [0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0];
+  const comp = [0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0];
+  const count = [0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0];
+  const occurrences = [0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0];
+  const baseMonths = baseTo - baseFrom + 1;
+  // Whole years add one occurrence to every month; the remainder runs from baseFrom's month.
+  for (let m = 0; m < 12; m++) occurrences[m] = Math.floor(baseMonths / 12);
+  for (let k = 0; k < baseMonths % 12; k++) occurrences[(baseFrom + k) % 12]++;
   const i0 = Math.max(0, baseFrom - start);
   const i1 = Math.min(x.length - 1, baseTo - start);
   let cal = (start + i0) % 12;

@@ -7,13 +7,13 @@ import { toNullable } from './to-nullable';
 import type { MonthlySeries } from './types';
 
 /** Body of POST /api/analysis/budget: a tendency and the named terms that should add up to it. */
-export interface BudgetRequest {
+export interface BudgetInput {
   tendency: MonthlySeries;
   terms: Record<string, MonthlySeries>;
 }
 
 /** Budget closure: Σ terms, residual = tendency − Σ terms, and their sizes. */
-export interface BudgetResponse {
+export interface BudgetOutput {
   sumOfTerms: { start: string; values: (number | null)[] };
   residual: { start: string; values: (number | null)[] };
   rmsResidual: number | null;
@@ -26,7 +26,7 @@ export interface BudgetResponse {
  * the tendency missing has a null residual. relativeResidual = rms(residual)/rms(tendency), both over the months where the
  * residual exists, so the two rms see the same months; null when undefined (no months, zero tendency).
  */
-export function budget(req: BudgetRequest): BudgetResponse {
+export function budget(req: BudgetInput): BudgetOutput {
   const names = Object.keys(req.terms);
   if (names.length === 0) throw new AnalysisInputError('budget needs at least one term');
   const start = parseMonth(req.tendency.start);

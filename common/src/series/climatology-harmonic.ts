@@ -15,9 +15,9 @@ export const MAX_HARMONICS = 5;
 export function harmonicClimatology(
   stats: BaseMonthStats,
   harmonics: number,
-): { climatology: Float64Array; warnings: string[] } {
+): { climatology: number[]; warnings: string[] } {
   const p = 2 * harmonics + 1;
-  const climatology = new Float64Array(12).fill(NaN);
+  const climatology: number[] = new Array(12).fill(NaN);
   let total = 0;
   let n = 0;
   let monthsWithData = 0;

@@ -10,8 +10,8 @@ import { MONTH_NAMES } from './month';
 export function monthlyClimatology(
   stats: BaseMonthStats,
   minYears?: number,
-): { climatology: Float64Array; warnings: string[] } {
-  const climatology = new Float64Array(12).fill(NaN);
+): { climatology: number[]; warnings: string[] } {
+  const climatology: number[] = new Array(12).fill(NaN);
   const warnings: string[] = [];
   for (let m = 0; m < 12; m++) {
     const years = stats.occurrences[m];

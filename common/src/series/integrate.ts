@@ -6,7 +6,7 @@ import { isPresent } from './missing';
 import type { MonthlySeries } from './types';
 
 /** Body of POST /api/analysis/integrate: a rate series, its unit, and the months to integrate over. */
-export interface IntegrateRequest {
+export interface IntegrateInput {
   series: MonthlySeries;
   units: string;
   from: string;
@@ -14,7 +14,7 @@ export interface IntegrateRequest {
 }
 
 /** Total change over the period, in the rate's unit without its time part ("Pg C/yr" → "Pg C"). */
-export interface IntegrateResponse {
+export interface IntegrateOutput {
   total: number;
   units: string;
 }
@@ -28,7 +28,7 @@ export interface IntegrateResponse {
  * A missing month in the period, or a period outside the series, is an AnalysisInputError naming
  * the months: a total that silently skipped months would be wrong by their share.
  */
-export function integrate(req: IntegrateRequest): IntegrateResponse {
+export function integrate(req: IntegrateInput): IntegrateOutput {
   const unit = parseUnit(req.units);
   if (unit.time !== -1) throw new UnitError(`unit "${req.units}" is not a rate (per time): nothing to integrate`, req.units);
   if (unit.withoutTime === '') throw new UnitError(`unit "${req.units}" names no quantity to integrate`, req.units);

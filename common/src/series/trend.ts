@@ -3,13 +3,13 @@ import { toFloat64 } from './to-float64';
 import type { MonthlySeries } from './types';
 
 /** Body of POST /api/analysis/trend. */
-export interface TrendRequest {
+export interface TrendInput {
   series: MonthlySeries;
   per?: 'year' | 'decade';
 }
 
 /** Linear trend: slope (and its standard error) per year or per decade; intercept at the series' first month. */
-export interface TrendResponse {
+export interface TrendOutput {
   slope: number | null;
   intercept: number | null;
   slopeStdErr: number | null;
@@ -22,7 +22,7 @@ export interface TrendResponse {
  * 1/12 — months treated as equal twelfths of a year), by the centred formulation of ols().
  * per = "decade" multiplies slope and its standard error by 10. Undefined statistics are null.
  */
-export function trend(req: TrendRequest): TrendResponse {
+export function trend(req: TrendInput): TrendOutput {
   const y = toFloat64(req.series.values);
   const t = new Float64Array(y.length);
   for (let i = 0; i < y.length; i++) t[i] = i / 12;

@@ -55,6 +55,19 @@ describe('lagCorrelation()', () => {
     }
   });
 
+  it('takes the same values on gap-free windows (prefix-sum path) as simple-statistics sampleCorrelation() and lag1Autocorrelation()', () => {
+    const xv = ar1(240, 0.7, 12);
+    const yv = ar1(260, 0.5, 13).map((v, i) => v + 0.4 * (xv[i] ?? 0));
+    const res = lagCorrelation({ x: { start: '1990-01', values: xv }, y: { start: '1990-04', values: yv }, maxLag: 24 });
+    for (const row of res.lags) {
+      const { px, py } = pairsAt({ start: 1990 * 12, v: xv }, { start: 1990 * 12 + 3, v: yv }, row.lag);
+      expect(row.n).toBe(px.length);
+      expect(Math.abs((row.r as number) - sampleCorrelation(px as number[], py as number[]))).toBeLessThan(1e-12);
+      const nEff = effectiveSampleSize(row.n, lag1Autocorrelation(px), lag1Autocorrelation(py)) as number;
+      expect(Math.abs((row.nEff as number) - nEff)).toBeLessThan(1e-9 * nEff);
+    }
+  });
+
   it('computes nEff = n(1 − r1x·r1y)/(1 + r1x·r1y) (Bretherton et al. 1999, J. Climate 12:1990–2009) from the paired values, and p from it', () => {
     const xv = ar1(300, 0.8, 4);
     const yv = ar1(300, 0.6, 5).map((v, i) => v + 0.3 * xv[i]);

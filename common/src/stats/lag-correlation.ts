@@ -1,14 +1,19 @@
 import { parseMonth } from '../series/month';
-import { toFloat64 } from '../series/to-float64';
+import { toFloat64Into } from '../series/to-float64';
 import type { MonthlySeries } from '../series/types';
 import { correlationPValue } from './correlation-p-value';
 import { effectiveSampleSize } from './effective-sample-size';
-import { LAG_N, LAG_R, LAG_R1X, LAG_R1Y, lagWindowStats } from './lag-window-stats';
+import { lagPrefixSums } from './lag-prefix-sums';
+import { LAG_N, LAG_R, LAG_R1X, LAG_R1Y, lagWindowStats, lagWindowStatsComplete } from './lag-window-stats';
 import { prepareForCorrelation } from './prepare-for-correlation';
 import { averageRanks } from './rank';
+import { scratchFloat64, scratchSlot } from './scratch';
+
+// Work buffers of the scan (inputs as doubles, prefix sums); nothing in them outlives a call.
+const WORK = scratchSlot();
 
 /** Body of POST /api/analysis/lag-correlation. */
-export interface LagCorrelationRequest {
+export interface LagCorrelationInput {
   x: MonthlySeries;
   y: MonthlySeries;
   maxLag: number;
@@ -25,7 +30,7 @@ export interface LagCorrelationRow {
 }
 
 /** Result of lagCorrelation(): every lag from −maxLag to +maxLag. */
-export interface LagCorrelationResponse {
+export interface LagCorrelationOutput {
   lags: LagCorrelationRow[];
 }
 
@@ -37,13 +42,21 @@ export interface LagCorrelationResponse {
  * Spearman ranks the paired values of each lag (average ranks for ties) and applies the same
  * machinery, nEff included, to the ranks. A lag longer than the overlap gives n = 0 and nulls.
  */
-export function lagCorrelation(req: LagCorrelationRequest): LagCorrelationResponse {
-  const xs = toFloat64(req.x.values);
-  const ys = toFloat64(req.y.values);
+export function lagCorrelation(req: LagCorrelationInput): LagCorrelationOutput {
+  const nx = req.x.values.length;
+  const ny = req.y.values.length;
+  // One scratch block: x, y as doubles, then their prefix sums (4(n + 1) each).
+  const work = scratchFloat64(WORK, 5 * (nx + ny) + 8);
+  const xs = toFloat64Into(req.x.values, work.subarray(0, nx));
+  const ys = toFloat64Into(req.y.values, work.subarray(nx, nx + ny));
   const d = parseMonth(req.y.start) - parseMonth(req.x.start);
   const spearman = req.method === 'spearman';
-  const px = spearman ? xs : prepareForCorrelation(xs);
-  const py = spearman ? ys : prepareForCorrelation(ys);
+  // Prepared in place: the raw doubles are not needed again (Spearman ranks the raw values instead).
+  const px = spearman ? xs : prepareForCorrelation(xs, xs);
+  const py = spearman ? ys : prepareForCorrelation(ys, ys);
+  // Gap-free windows take the prefix-sum path (one multiply-add per pair); others the general kernel.
+  const sx = lagPrefixSums(px, work.subarray(nx + ny, nx + ny + 4 * (nx + 1)));
+  const sy = lagPrefixSums(py, work.subarray(nx + ny + 4 * (nx + 1), 5 * (nx + ny) + 8));
   const out = new Float64Array(4);
   const lags: LagCorrelationRow[] = [];
   for (let k = -req.maxLag; k <= req.maxLag; k++) {
@@ -58,7 +71,12 @@ export function lagCorrelation(req: LagCorrelationRequest): LagCorrelationRespon
     if (spearman) {
       const [rx, ry] = rankedWindow(xs, i0, ys, i0 + k - d, len);
       lagWindowStats(rx, 0, ry, 0, len, out);
-    } else lagWindowStats(px, i0, py, i0 + k - d, len, out);
+    } else {
+      const j0 = i0 + k - d;
+      const complete = sx.missing[i0 + len] === sx.missing[i0] && sy.missing[j0 + len] === sy.missing[j0];
+      if (complete) lagWindowStatsComplete(px, sx, i0, py, sy, j0, len, out);
+      else lagWindowStats(px, i0, py, j0, len, out);
+    }
     lags.push(toRow(k, out));
   }
   return { lags };

@@ -1,3 +1,5 @@
+import type { LagPrefixSums } from './lag-prefix-sums';
+
 /** Slots of the lag kernel's output array. */
 export const LAG_N = 0;
 export const LAG_R = 1;
@@ -31,6 +33,57 @@ export function lagWindowStats(x: Float64Array, xOff: number, y: Float64Array, y
       prevOk = true; pa = a; pb = b;
     } else prevOk = false;
   }
+  finish(n, sa, sb, saa, sbb, sab, m, pa1, pb1, leadA, trailA, leadB, trailB, out);
+}
+
+/**
+ * The same statistics as lagWindowStats for a window with no missing value in either member,
+ * from prefix sums (lagPrefixSums): only the cross-product Σ x·y needs a pass over the window,
+ * so the scan costs one multiply-add per pair and lag. Four accumulators break the add latency chain.
+ */
+export function lagWindowStatsComplete(
+  x: Float64Array,
+  px: LagPrefixSums,
+  xOff: number,
+  y: Float64Array,
+  py: LagPrefixSums,
+  yOff: number,
+  len: number,
+  out: Float64Array,
+): void {
+  let c0 = 0, c1 = 0, c2 = 0, c3 = 0;
+  let i = xOff;
+  const shift = yOff - xOff;
+  const stop = xOff + len;
+  for (; i + 3 < stop; i += 4) {
+    c0 += x[i] * y[i + shift];
+    c1 += x[i + 1] * y[i + 1 + shift];
+    c2 += x[i + 2] * y[i + 2 + shift];
+    c3 += x[i + 3] * y[i + 3 + shift];
+  }
+  for (; i < stop; i++) c0 += x[i] * y[i + shift];
+  const xEnd = xOff + len;
+  const yEnd = yOff + len;
+  finish(
+    len,
+    px.sum[xEnd] - px.sum[xOff], py.sum[yEnd] - py.sum[yOff],
+    px.sumSq[xEnd] - px.sumSq[xOff], py.sumSq[yEnd] - py.sumSq[yOff],
+    c0 + c1 + (c2 + c3),
+    len - 1,
+    px.lag1[xEnd - 1] - px.lag1[xOff], py.lag1[yEnd - 1] - py.lag1[yOff],
+    // Over adjacent pairs the leading members are all but the last value, the trailing all but the first.
+    px.sum[xEnd - 1] - px.sum[xOff], px.sum[xEnd] - px.sum[xOff + 1],
+    py.sum[yEnd - 1] - py.sum[yOff], py.sum[yEnd] - py.sum[yOff + 1],
+    out,
+  );
+}
+
+/** Turns the window's raw sums into n, r, r1x, r1y (NaN when undefined) in `out`. */
+function finish(
+  n: number, sa: number, sb: number, saa: number, sbb: number, sab: number,
+  m: number, pa1: number, pb1: number, leadA: number, trailA: number, leadB: number, trailB: number,
+  out: Float64Array,
+): void {
   out[LAG_N] = n;
   out[LAG_R] = out[LAG_R1X] = out[LAG_R1Y] = NaN;
   if (n < 3) return;

@@ -4,7 +4,8 @@
  * sums of the lag kernel neither overflow (1e300 data) nor cancel (1e8 offsets, as NIST NumAcc):
  * the "shifted data" remedy of Chan, Golub & LeVeque (1983), Am. Statistician 37(3):242–247.
  */
-export function prepareForCorrelation(x: Float64Array): Float64Array {
+// `out` (length ≥ x.length) may be x itself or a scratch buffer.
+export function prepareForCorrelation(x: Float64Array, out: Float64Array = new Float64Array(x.length)): Float64Array {
   let n = 0;
   let mean = 0;
   for (let i = 0; i < x.length; i++) {
@@ -17,7 +18,6 @@ export function prepareForCorrelation(x: Float64Array): Float64Array {
     if (d > max) max = d;
   }
   const scale = max > 0 && Number.isFinite(max) ? Math.pow(2, -Math.ceil(Math.log2(max))) : 1;
-  const out = new Float64Array(x.length);
   for (let i = 0; i < x.length; i++) out[i] = (x[i] - mean) * scale;
   return out;
 }
