@@ -5,3 +5,4 @@ export * from './notebooks';
 export * from './series';
 export * from './series-import';
 export * from './uploads';
+export * from './analysis';
