@@ -1,0 +1,61 @@
+/**
+ * The anomaly engine: small pure functions over monthly series, statistics, ENSO events, carbon
+ * units and grid geometry. No runtime dependencies; the HTTP schemas live in ./api/analysis.
+ * Missing values follow one rule (series/missing.ts): a value is present when it is a finite number.
+ */
+// Monthly series
+export * from './series/analysis-input-error';
+export * from './series/types';
+export * from './series/missing';
+export * from './series/month';
+export * from './series/to-float64';
+export * from './series/to-nullable';
+export * from './series/on-span';
+export * from './series/running-mean';
+export * from './series/base-month-stats';
+export * from './series/climatology-monthly';
+export * from './series/climatology-harmonic';
+export * from './series/detrend';
+export * from './series/standardize-by-month';
+export * from './series/anomaly';
+export * from './series/trend';
+export * from './series/rms';
+export * from './series/budget';
+export * from './series/integrate';
+// Statistics
+export * from './stats/neumaier-sum';
+export * from './stats/welford';
+export * from './stats/mean';
+export * from './stats/lag1-autocorrelation';
+export * from './stats/pearson';
+export * from './stats/rank';
+export * from './stats/spearman';
+export * from './stats/ols';
+export * from './stats/solve-linear';
+export * from './stats/log-gamma';
+export * from './stats/log-beta';
+export * from './stats/incomplete-beta';
+export * from './stats/inverse-incomplete-beta';
+export * from './stats/student-t';
+export * from './stats/correlation-p-value';
+export * from './stats/effective-sample-size';
+export * from './stats/significance-threshold';
+export * from './stats/prng';
+export * from './stats/lag-correlation';
+// ENSO events
+export * from './events/round-half-away';
+export * from './events/strength';
+export * from './events/detect-events';
+export * from './events/composite';
+// Units
+export * from './units/constants';
+export * from './units/unit-error';
+export * from './units/parse-unit';
+export * from './units/convert';
+// Grid geometry
+export * from './grid/earth-radius';
+export * from './grid/edges-from-centres';
+export * from './grid/cell-areas';
+export * from './grid/area-mean';
+export * from './grid/area-mean-series';
+export * from './grid/zonal-mean';

@@ -1,0 +1,80 @@
+import { AnalysisInputError } from './analysis-input-error';
+import { baseMonthStats } from './base-month-stats';
+import { harmonicClimatology } from './climatology-harmonic';
+import { monthlyClimatology } from './climatology-monthly';
+import { detrend as removeTrend } from './detrend';
+import { formatMonth, parseMonth } from './month';
+import { runningMean } from './running-mean';
+import { standardizeByMonth } from './standardize-by-month';
+import { toFloat64 } from './to-float64';
+import { toNullable } from './to-nullable';
+import type { MonthlySeries } from './types';
+
+/** Options of anomaly(): the body of POST /api/analysis/anomaly. */
+export interface AnomalyInput {
+  series: MonthlySeries;
+  base: { from: string; to: string };
+  method?: 'monthly-mean' | 'harmonic';
+  harmonics?: number;
+  standardize?: boolean;
+  detrend?: boolean;
+  smooth?: number;
+  minYears?: number;
+}
+
+/** Result of anomaly(). climatology holds 12 values, January first, in the series' units. */
+export interface AnomalyOutput {
+  anomaly: { start: string; values: (number | null)[] };
+  climatology: (number | null)[];
+  warnings: string[];
+}
+
+/**
+ * Anomalies of a monthly series against a base-period climatology, in this order:
+ * deseasonalise (monthly-mean or harmonic climatology) → detrend (OLS line over the whole series)
+ * → standardize (÷ base-period sd of the month) → smooth (centred running mean, last).
+ * A base period that misses the series, or a series shorter than the base period, is not an
+ * error: the minimum-years rule then leaves months null and `warnings` says why. Only a base
+ * period that ends before it starts is rejected (AnalysisInputError).
+ */
+export function anomaly(req: AnomalyInput): AnomalyOutput {
+  const start = parseMonth(req.series.start);
+  const baseFrom = parseMonth(req.base.from);
+  const baseTo = parseMonth(req.base.to);
+  if (baseTo < baseFrom) throw new AnalysisInputError(`base period ends (${req.base.to}) before it starts (${req.base.from})`);
+  const x = toFloat64(req.series.values);
+  const warnings: string[] = [];
+  const end = start + x.length - 1;
+  if (x.length === 0) warnings.push('series is empty');
+  else if (baseTo < start || baseFrom > end) {
+    warnings.push(`base period ${req.base.from}..${req.base.to} does not overlap the series (${req.series.start}..${formatMonth(end)})`);
+  } else if (baseFrom < start || baseTo > end) {
+    warnings.push(`series covers only part of the base period ${req.base.from}..${req.base.to}`);
+  }
+  const stats = baseMonthStats(x, start, baseFrom, baseTo);
+  const clim =
+    req.method === 'harmonic' ? harmonicClimatology(stats, req.harmonics ?? 2) : monthlyClimatology(stats, req.minYears);
+  warnings.push(...clim.warnings);
+  let a: Float64Array = new Float64Array(x.length);
+  let cal = start % 12;
+  for (let i = 0; i < x.length; i++) {
+    a[i] = x[i] - clim.climatology[cal];
+    cal = cal === 11 ? 0 : cal + 1;
+  }
+  if (req.detrend) {
+    const d = removeTrend(a);
+    if (!d.fitted) warnings.push('detrend skipped: fewer than two anomalies present');
+    a = d.values;
+  }
+  if (req.standardize) {
+    const s = standardizeByMonth(a, start, baseFrom, baseTo);
+    warnings.push(...s.warnings);
+    a = s.values;
+  }
+  if (req.smooth !== undefined && req.smooth > 1) a = runningMean(a, req.smooth);
+  return {
+    anomaly: { start: req.series.start, values: toNullable(a) },
+    climatology: toNullable(clim.climatology),
+    warnings,
+  };
+}
