@@ -1,2 +1,4 @@
 export * from './api';
 export * from './roles';
+export * from './engine';
+export * from './time';

@@ -1,5 +1,5 @@
 import { CfTimeError } from './cf-time-error';
-import { daysInMonth } from './days-in-month';
+import { calendarDaysInMonth } from './calendar-days-in-month';
 import type { CfCalendar } from './types';
 
 // Days before each month in a 365-day and a 366-day year.
@@ -14,7 +14,7 @@ const BEFORE_366 = [0, 31, 60, 91, 121, 152, 182, 213, 244, 274, 305, 335];
  * Throws on dates that do not exist in the calendar (e.g. 2001-02-29, 1582-10-10 in `standard`).
  */
 export function dayNumber(year: number, month: number, day: number, calendar: CfCalendar): number {
-  if (!Number.isInteger(year) || !Number.isInteger(month) || !Number.isInteger(day) || month < 1 || month > 12 || day < 1 || day > daysInMonth(year, month, calendar)) {
+  if (!Number.isInteger(year) || !Number.isInteger(month) || !Number.isInteger(day) || month < 1 || month > 12 || day < 1 || day > calendarDaysInMonth(year, month, calendar)) {
     throw new CfTimeError('bad-reference', `${formatDate(year, month, day)} is not a date in the ${calendar} calendar`);
   }
   switch (calendar) {

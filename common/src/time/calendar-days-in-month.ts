@@ -8,7 +8,7 @@ const COMMON = [31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31];
  * `standard` follows Julian before 1582 and Gregorian after (1582 itself is not a leap year in either).
  * October 1582 in `standard` still returns 31: the ten dropped days are rejected by `dayNumber()`.
  */
-export function daysInMonth(year: number, month: number, calendar: CfCalendar): number {
+export function calendarDaysInMonth(year: number, month: number, calendar: CfCalendar): number {
   if (calendar === '360_day') return 30;
   if (month !== 2) return COMMON[month - 1];
   switch (calendar) {
