@@ -41,7 +41,7 @@ export interface GridWeights {
  * form with clipped edges. When the variable's `cell_measures` names an area variable present in
  * the file (CF 1.11 §7.2), its areas are used, times the fraction of the cell inside the box.
  */
-export function gridWeights(file: NetcdfFile, layout: GridLayout, box: Box, radius: number): GridWeights {
+export function gridWeights(file: NetcdfFile, layout: GridLayout, box: Box, radius: number, useCellMeasures = true): GridWeights {
   checkBox(box, layout);
   const notes: string[] = [];
   const lat = readCellEdges(file, layout.lat);
@@ -65,7 +65,7 @@ export function gridWeights(file: NetcdfFile, layout: GridLayout, box: Box, radi
   }
   if (!overlapDeg.some((x) => x > 0)) throw new NetcdfImportError('bad-coordinates', layout.lon.variable, `no longitude cell of ${layout.variable.name} lies in ${box.lon[0]}..${box.lon[1]}`);
 
-  const measured = cellMeasureAreas(file, layout, notes);
+  const measured = useCellMeasures ? cellMeasureAreas(file, layout, notes) : null;
   const area = new Float64Array(rowCount * nlon);
   const latCentres = new Float64Array(rowCount);
   for (let r = 0; r < rowCount; r++) {

@@ -171,7 +171,7 @@ function toAttributeValue(value: unknown): NcAttributeValue | undefined {
   if (typeof value === 'number') return value;
   if (typeof value === 'bigint') return Number(value);
   if (ArrayBuffer.isView(value) && 'length' in value) {
-    const list = Array.from(value as ArrayLike<number | bigint>, Number);
+    const list = Array.from(value as unknown as ArrayLike<number | bigint>, Number);
     return list.length === 1 ? list[0] : list;
   }
   if (Array.isArray(value)) {

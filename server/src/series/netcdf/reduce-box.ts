@@ -41,7 +41,7 @@ export function reduceBox(file: NetcdfFile, name: string, options: BoxReductionO
   const { coordinates, notes } = findCoordinates(file);
   const layout = resolveGridLayout(file.variable(name), coordinates);
   const monthly = readMonthlyTime(file, layout.time.variable, { allowGaps: options.allowGaps });
-  const w = gridWeights(file, layout, options.box, radius);
+  const w = gridWeights(file, layout, options.box, radius, options.cellMeasures ?? true);
   const decoder = createCfDecoder(layout.variable);
 
   // Compact list of cells with weight, so the inner loop touches nothing outside the box.

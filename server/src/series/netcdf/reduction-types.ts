@@ -24,6 +24,8 @@ export interface ReductionProvenance {
 export interface ReductionOptions {
   /** Sphere radius in metres; default the engine's GRS80 mean radius R1. */
   radius?: number;
+  /** Use the file's cell areas named by cell_measures (CF 1.11 §7.2) when present (default true). */
+  cellMeasures?: boolean;
   /** Fill skipped months with null instead of refusing the time axis. */
   allowGaps?: boolean;
 }

@@ -40,7 +40,7 @@ export function zonalMeanField(file: NetcdfFile, name: string, options: ZonalMea
   const { coordinates, notes } = findCoordinates(file);
   const layout = resolveGridLayout(file.variable(name), coordinates);
   const monthly = readMonthlyTime(file, layout.time.variable, { allowGaps: options.allowGaps });
-  const w = gridWeights(file, layout, box, radius);
+  const w = gridWeights(file, layout, box, radius, options.cellMeasures ?? true);
   const decoder = createCfDecoder(layout.variable);
   const plane = w.rowCount * w.nlon;
   const depth = !!layout.depth;
