@@ -70,7 +70,8 @@ export function reduceBox(file: NetcdfFile, name: string, options: BoxReductionO
       const dz = w.thickness[k];
       if (dz === 0) continue;
       const base = k * plane;
-      // Row-level partial sums keep the rounding error of a million-cell sum near 1e-13 relative.
+      // A partial sum per level, then across levels: double accumulation of float32 inputs keeps the
+      // relative rounding error near n·2^-53 ≈ 1e-10 for 10^6 cells, far below the data precision.
       let s = 0;
       let a = 0;
       for (let m = 0; m < n; m++) {
