@@ -172,7 +172,8 @@ function printTable(x: NetcdfBenchFigures, months: number, nlat: number, nlon: n
   for (const [k, v] of rows) console.log(`  ${k.padEnd(width)}  ${v}`);
 }
 
-if (require.main === module) {
+// Run when executed directly (node server/dist/bench/netcdf.js), not when imported by a test.
+if (typeof require !== 'undefined' && require.main === module) {
   runNetcdfBench().catch((error: unknown) => {
     console.error(error);
     process.exitCode = 1;
