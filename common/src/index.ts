@@ -2,3 +2,4 @@ export * from './api';
 export * from './roles';
 export * from './collab';
 export * from './engine';
+export * from './time';

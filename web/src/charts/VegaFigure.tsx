@@ -9,12 +9,12 @@ import { expressionInterpreter } from 'vega-interpreter';
  */
 export default function VegaFigure({ spec, label }: { spec: VisualizationSpec; label: string }) {
   return (
-    <VegaEmbed
-      role="figure"
-      aria-label={label}
-      spec={spec}
-      options={{ renderer: 'svg', actions: false, ast: true, expr: expressionInterpreter, config: { font: 'Source Sans 3' } }}
-      style={{ width: '100%' }}
-    />
+    <div role="figure" aria-label={label} style={{ width: '100%' }}>
+      <VegaEmbed
+        spec={spec}
+        options={{ renderer: 'svg', actions: false, ast: true, expr: expressionInterpreter, config: { font: 'Source Sans 3' } }}
+        style={{ width: '100%' }}
+      />
+    </div>
   );
 }

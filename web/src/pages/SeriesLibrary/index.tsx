@@ -6,6 +6,7 @@ import { useSeriesList } from '../../api/series';
 import { useCurrentGroup } from '../../current-group';
 import { EmptyState } from '../../components/EmptyState';
 import { ErrorNote } from '../../components/ErrorNote';
+import { TableCaption } from '../../components/TableCaption';
 import { PageTitle } from '../../components/PageTitle';
 import { Sparkline } from '../../components/Sparkline';
 import { formatWhen } from '../../components/dates';
@@ -86,7 +87,8 @@ export default function SeriesLibraryPage() {
       ) : (
         data && (
           <>
-            <Table.Root variant="surface" className="upwell-numbers" aria-label="Series">
+            <Table.Root variant="surface" className="upwell-numbers">
+<TableCaption>Series</TableCaption>
               <Table.Header>
                 <Table.Row>
                   <SortHeader label="Name" column="name" sort={sort} order={order} onSort={onSort} />
