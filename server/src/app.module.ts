@@ -15,6 +15,7 @@ import { UsersModule } from './users/users.module';
 import { RealtimeModule } from './realtime/realtime.module';
 import { SeriesModule } from './series/series.module';
 import { UploadsModule } from './uploads/uploads.module';
+import { FieldsModule } from './fields/fields.module';
 
 /** The whole server, built for one resolved configuration. */
 @Module({})
@@ -40,6 +41,7 @@ export class AppModule {
         SeriesModule,
         AnalysisModule,
         UploadsModule,
+        FieldsModule,
       ],
       controllers: [HealthController],
       providers: [MigrateOnStart],

@@ -6,3 +6,4 @@ export * from './series';
 export * from './series-import';
 export * from './uploads';
 export * from './analysis';
+export * from './fields';

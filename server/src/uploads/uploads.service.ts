@@ -32,6 +32,9 @@ import { progressStream } from './progress-stream';
 import { cleanFileName, sniffFormat } from './sniff-format';
 import { UploadedFile } from './uploaded-file.entity';
 import { formatDepthLayer } from './depth-layer';
+import { GriddedField } from '../fields/field.entity';
+import { describeNetcdf, importSeries, NetcdfImportError, openNetcdf, type NetcdfFile } from '../series/netcdf';
+import { presentNetcdfPreview } from './netcdf-preview.presenter';
 
 /** A file as Multer and the hashing storage hand it over. */
 export type ReceivedFile = HashedFile & { originalname: string };
@@ -91,6 +94,7 @@ export class UploadsService {
     const path = join(this.config.dataDir, upload.storedPath);
     this.events.uploadProgress(user.id, { uploadId, phase: 'importing', fraction: null });
     const wanted = await this.seriesFromFile(upload, path, body, user);
+    const fields = await this.fieldsFromNetcdf(upload, path, body, user);
     const targets = await this.resolveTargets(upload, body.targets);
     const added: AddedVersion[] = await this.em.transactional(async (em) => {
       const out: AddedVersion[] = [];
@@ -107,7 +111,7 @@ export class UploadsService {
     this.events.uploadProgress(user.id, { uploadId, phase: 'done', fraction: 1 });
     return {
       series: added.map((a) => ({ id: a.series.id, name: a.series.name, version: a.version.number, created: a.created })),
-      fields: [],
+      fields: fields.map((f) => ({ id: f.id, name: f.longName || f.variable })),
     };
   }
 
@@ -130,7 +134,25 @@ export class UploadsService {
       const csv = await this.parseCsv(upload, path, user);
       return { ...base, csv, netcdf: null };
     }
-    throw new UnsupportedMediaTypeException('NetCDF import is not available yet');
+    this.events.uploadProgress(user.id, { uploadId: upload.id, phase: 'parsing', fraction: null });
+    const netcdf = await this.withNetcdf(path, (file) => presentNetcdfPreview(describeNetcdf(file)));
+    return { ...base, csv: null, netcdf };
+  }
+
+  /** Opens a stored NetCDF file for one piece of work; a file that cannot be read becomes a 422 naming where. */
+  private async withNetcdf<T>(path: string, work: (file: NetcdfFile) => T | Promise<T>): Promise<T> {
+    let file: NetcdfFile | null = null;
+    try {
+      file = await openNetcdf(path);
+      return await work(file);
+    } catch (err) {
+      if (err instanceof NetcdfImportError) {
+        throw new UnprocessableEntityException({ statusCode: 422, error: 'Unprocessable Entity', message: err.message, code: err.code, where: err.where });
+      }
+      throw err;
+    } finally {
+      await file?.close();
+    }
   }
 
   private async parseCsv(upload: UploadedFile, path: string, user: User) {
@@ -148,7 +170,7 @@ export class UploadsService {
 
   /** The series the mapping asks for, read from the stored file the same way the preview read it. */
   private async seriesFromFile(upload: UploadedFile, path: string, body: ImportUploadBody, user: User) {
-    if (upload.format !== 'csv') throw new UnsupportedMediaTypeException('NetCDF import is not available yet');
+    if (upload.format !== 'csv') return this.seriesFromNetcdf(path, body);
     const preview = await this.parseCsv(upload, path, user);
     try {
       return buildSeriesFromMapping(preview, { columns: body.columns }).map((s) => ({
@@ -171,6 +193,69 @@ export class UploadsService {
       if (err instanceof CsvImportError) throw new BadRequestException(err.message);
       throw err;
     }
+  }
+
+  /** 1-D variables of a NetCDF file, named in `columns` by variable name, as series. */
+  private seriesFromNetcdf(path: string, body: ImportUploadBody) {
+    return this.withNetcdf(path, (file) =>
+      body.columns
+        .filter((c) => !c.skip)
+        .map((c) => {
+          if (c.skip) throw new Error('unreachable');
+          if (!file.variables.some((v) => v.name === c.column)) throw new BadRequestException(`the file has no variable “${c.column}”`);
+          const s = importSeries(file, c.column);
+          return {
+            column: c.column,
+            start: s.start,
+            values: s.values,
+            transform: { type: 'netcdf-variable' as const, variable: c.column },
+            meta: {
+              name: c.name,
+              kind: c.kind,
+              variable: c.variable,
+              units: c.units || s.units || '',
+              region: c.region ?? '',
+              depthLayer: formatDepthLayer(c.depthLayer ?? null),
+              source: c.source ?? '',
+              notes: c.notes ?? '',
+            },
+          };
+        }),
+    );
+  }
+
+  /** Gridded variables to keep as fields (the values stay in the stored file). */
+  private async fieldsFromNetcdf(upload: UploadedFile, path: string, body: ImportUploadBody, user: User): Promise<GriddedField[]> {
+    if (!body.grids.length) return [];
+    if (upload.format === 'csv') throw new BadRequestException('a CSV table has no gridded variables');
+    const { described, extent } = await this.withNetcdf(path, async (file) => {
+      const d = describeNetcdf(file);
+      const range = async (role: string) => {
+        const c = d.coordinates.find((x) => x.role === role);
+        if (!c) return [Number.NaN, Number.NaN];
+        const v = Array.from(await file.read(c.variable)).filter(Number.isFinite);
+        return [Math.min(...v), Math.max(...v)];
+      };
+      const [south, north] = await range('latitude');
+      const [west, east] = await range('longitude');
+      return { described: d, extent: [south, north, west, east] as [number, number, number, number] };
+    });
+    return body.grids.map((g) => {
+      const c = described.candidates.find((x) => x.name === g.variable);
+      if (!c || c.kind !== 'field') throw new BadRequestException(`“${g.variable}” is not a gridded (time, lat, lon) variable of this file`);
+      return this.em.create(GriddedField, {
+        group: upload.group,
+        file: upload,
+        variable: c.name,
+        longName: g.name,
+        units: c.units ?? '',
+        dims: c.dims,
+        shape: c.shape,
+        start: c.start,
+        extent,
+        createdBy: user,
+      });
+    });
   }
 
   /** Existing series that columns should add a version to; each must belong to the upload's group. */
