@@ -3,3 +3,4 @@ export * from './roles';
 export * from './collab';
 export * from './engine';
 export * from './time';
+export * from './editor';

@@ -7,3 +7,4 @@ export * from './series-import';
 export * from './uploads';
 export * from './analysis';
 export * from './fields';
+export * from './figures';

@@ -1,0 +1,3 @@
+export * from './live-figure';
+export * from './live-number';
+export * from './extensions';
