@@ -8,3 +8,4 @@ export * from './uploads';
 export * from './analysis';
 export * from './fields';
 export * from './figures';
+export * from './documents';

@@ -51,6 +51,12 @@ export class NotebooksController {
     return this.notebooks.get(user, notebookId);
   }
 
+  @Post('notebooks/:notebookId/duplicate')
+  @ApiOperation({ summary: 'Copy a notebook’s document into a new notebook you lead (lead author)' })
+  duplicate(@CurrentUser() user: User, @Param('notebookId', uuidParam('notebookId')) notebookId: string) {
+    return this.notebooks.duplicate(user, notebookId);
+  }
+
   @Patch('notebooks/:notebookId')
   @ApiOperation({ summary: 'Rename, describe, archive or restore a notebook (lead author)' })
   @ApiJsonBody(updateNotebookRequestSchema)

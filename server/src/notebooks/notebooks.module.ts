@@ -1,13 +1,14 @@
 import { Module } from '@nestjs/common';
+import { DocumentsModule } from '../documents/documents.module';
 import { GroupsModule } from '../groups/groups.module';
-import { NotebookPolicy } from './notebook.policy';
+import { NotebookAccessModule } from './notebook-access.module';
 import { NotebooksController } from './notebooks.controller';
 import { NotebooksService } from './notebooks.service';
 
 @Module({
-  imports: [GroupsModule],
+  imports: [GroupsModule, NotebookAccessModule, DocumentsModule],
   controllers: [NotebooksController],
-  providers: [NotebooksService, NotebookPolicy],
-  exports: [NotebookPolicy],
+  providers: [NotebooksService],
+  exports: [NotebookAccessModule],
 })
 export class NotebooksModule {}

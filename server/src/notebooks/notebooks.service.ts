@@ -9,6 +9,7 @@ import {
   type NotebookView,
   type UpdateNotebookRequest,
 } from '@upwell/common';
+import { DocumentsService } from '../documents/documents.service';
 import { GroupMembership } from '../groups/group.entity';
 import { GroupPolicy } from '../groups/group.policy';
 import type { User } from '../users/user.entity';
@@ -23,6 +24,7 @@ export class NotebooksService {
     private readonly em: EntityManager,
     private readonly groups: GroupPolicy,
     private readonly policy: NotebookPolicy,
+    private readonly documents: DocumentsService,
   ) {}
 
   /** The group's notebooks the person holds a role on, newest edit first. */
@@ -52,8 +54,22 @@ export class NotebooksService {
     const membership = await this.groups.authorize(user, groupId, 'create-notebook');
     const notebook = this.em.create(Notebook, { group: membership.group, title: body.title, description: body.description, owner: user });
     this.em.create(NotebookRoleAssignment, { notebook, user, role: 'lead-author' });
+    this.documents.createInitial(this.em, notebook, body.title, body.description);
     await this.em.flush();
     return presentNotebook(notebook, 'lead-author');
+  }
+
+  /**
+   * Copies a notebook (document, not its comments or snapshots) into a new one
+   * led by the person copying; only a lead author may duplicate.
+   */
+  async duplicate(user: User, notebookId: string, title?: string): Promise<NotebookView> {
+    const { notebook } = await this.policy.authorize(user, notebookId, 'delete');
+    const copy = this.em.create(Notebook, { group: notebook.group, title: title ?? `${notebook.title} (copy)`.slice(0, 200), description: notebook.description, owner: user });
+    this.em.create(NotebookRoleAssignment, { notebook: copy, user, role: 'lead-author' });
+    await this.documents.copyInto(this.em, notebookId, copy);
+    await this.em.flush();
+    return presentNotebook(copy, 'lead-author');
   }
 
   async get(user: User, notebookId: string): Promise<NotebookView> {

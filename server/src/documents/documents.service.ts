@@ -1,0 +1,105 @@
+import { EntityManager } from '@mikro-orm/sqlite';
+import { BadRequestException, Injectable, Logger } from '@nestjs/common';
+import type { DocumentState, DocumentUpdateResponse } from '@upwell/common';
+import * as Y from 'yjs';
+import { Notebook } from '../notebooks/notebook.entity';
+import { NotebookPolicy } from '../notebooks/notebook.policy';
+import type { User } from '../users/user.entity';
+import { renderDocument } from './document-render';
+import { initialDocumentState } from './initial-document';
+import { NotebookDocument, NotebookUpdate } from './notebook-document.entity';
+
+/** Updates waiting in the log before they are folded into the stored state. */
+const COMPACT_AFTER = 50;
+
+/**
+ * Stores notebook documents as Yjs state plus an append-only log of accepted
+ * updates. An update is written before it is acknowledged; compaction merges
+ * the log into the state in one transaction (Yjs merging is order-independent,
+ * so a crash leaves either the log or the merged state, never neither).
+ */
+@Injectable()
+export class DocumentsService {
+  private readonly logger = new Logger('Documents');
+
+  constructor(
+    private readonly em: EntityManager,
+    private readonly policy: NotebookPolicy,
+  ) {}
+
+  /** Creates the first state of a new notebook's document, inside the caller's unit of work. */
+  createInitial(em: EntityManager, notebook: Notebook, title: string, description: string): NotebookDocument {
+    return em.create(NotebookDocument, { notebook, state: Buffer.from(initialDocumentState(title, description)) });
+  }
+
+  /** Copies a document's current content for a duplicated notebook. */
+  async copyInto(em: EntityManager, from: string, to: Notebook): Promise<void> {
+    const state = Y.encodeStateAsUpdate(await this.load(from, em));
+    em.create(NotebookDocument, { notebook: to, state: Buffer.from(state) });
+  }
+
+  async state(user: User, notebookId: string): Promise<DocumentState> {
+    await this.policy.authorize(user, notebookId, 'read');
+    const stored = await this.em.findOneOrFail(NotebookDocument, { notebook: notebookId });
+    const doc = await this.load(notebookId);
+    return { notebookId, state: Buffer.from(Y.encodeStateAsUpdate(doc)).toString('base64'), updatedAt: stored.updatedAt.toISOString() };
+  }
+
+  /** Accepts one update from a person who may edit; refuses one that breaks the document schema. */
+  async applyFromHttp(user: User, notebookId: string, base64: string): Promise<DocumentUpdateResponse> {
+    await this.policy.authorize(user, notebookId, 'edit');
+    const saved = await this.append(notebookId, Buffer.from(base64, 'base64'), user.id);
+    return { stored: true, updatedAt: saved.toISOString() };
+  }
+
+  /**
+   * Checks an update against the current document and stores it. Used by HTTP
+   * and by the socket gateway alike; the caller has already checked access.
+   */
+  async append(notebookId: string, update: Uint8Array, authorId: string | null, em: EntityManager = this.em): Promise<Date> {
+    const doc = await this.load(notebookId, em);
+    try {
+      Y.applyUpdate(doc, update);
+      renderDocument(doc);
+    } catch (err) {
+      throw new BadRequestException(`the document update was refused: ${err instanceof Error ? err.message : 'it could not be read'}`);
+    }
+    const now = new Date();
+    em.create(NotebookUpdate, { notebook: notebookId, update: Buffer.from(update), author: authorId });
+    await em.nativeUpdate(NotebookDocument, { notebook: notebookId }, { updatedAt: now });
+    await em.nativeUpdate(Notebook, { id: notebookId }, { updatedAt: now });
+    await em.flush();
+    if ((await em.count(NotebookUpdate, { notebook: notebookId })) >= COMPACT_AFTER) {
+      await this.compact(notebookId, em.fork()).catch((err) => this.logger.error(`compaction of ${notebookId} failed: ${err}`));
+    }
+    return now;
+  }
+
+  /** The document as it stands: stored state with the waiting updates applied. */
+  async load(notebookId: string, em: EntityManager = this.em): Promise<Y.Doc> {
+    const stored = await em.findOneOrFail(NotebookDocument, { notebook: notebookId }, { refresh: true });
+    const updates = await em.find(NotebookUpdate, { notebook: notebookId, id: { $gt: stored.compactedThrough } }, { orderBy: { id: 'asc' } });
+    const doc = new Y.Doc({ gc: true });
+    Y.applyUpdate(doc, stored.state);
+    for (const u of updates) Y.applyUpdate(doc, u.update);
+    return doc;
+  }
+
+  /** Folds the update log into the stored state and refreshes the JSON and text renderings. */
+  async compact(notebookId: string, em: EntityManager): Promise<void> {
+    await em.transactional(async (tx) => {
+      const stored = await tx.findOneOrFail(NotebookDocument, { notebook: notebookId });
+      const updates = await tx.find(NotebookUpdate, { notebook: notebookId, id: { $gt: stored.compactedThrough } }, { orderBy: { id: 'asc' } });
+      if (!updates.length) return;
+      const merged = Y.mergeUpdates([stored.state, ...updates.map((u) => u.update)]);
+      const doc = new Y.Doc();
+      Y.applyUpdate(doc, merged);
+      const { json, text } = renderDocument(doc);
+      stored.state = Buffer.from(Y.encodeStateAsUpdate(doc));
+      stored.compactedThrough = updates[updates.length - 1].id;
+      stored.json = json;
+      stored.text = text;
+      await tx.nativeDelete(NotebookUpdate, { notebook: notebookId, id: { $lte: stored.compactedThrough } });
+    });
+  }
+}
