@@ -1,89 +1,74 @@
-import { AlertDialog, Badge, Box, Button, Callout, Flex, Heading, Spinner, Text } from '@radix-ui/themes';
-import { useNavigate, useParams } from 'react-router';
+import { Badge, Box, Flex, Heading, Spinner, Tabs, Text } from '@radix-ui/themes';
+import { useParams } from 'react-router';
 import { NOTEBOOK_ROLE_LABELS } from '@upwell/common';
-import { useDeleteNotebook, useNotebook, useUpdateNotebook } from '../../api/notebooks';
+import { useNotebook } from '../../api/notebooks';
 import { ErrorNote } from '../../components/ErrorNote';
 import { formatWhen } from '../../components/dates';
+import { NotebookEditor } from '../../editor';
+import { FigureRefreshNotice } from '../../figures/FigureRefreshNotice';
+import { useSeriesLiveRefresh } from '../../realtime/socket';
+import { useNotebookDocument } from '../../sync/use-notebook-document';
 import { AccessList } from './AccessList';
+import { EventSetsPanel } from './EventSetsPanel';
+import { NotebookSettings } from './NotebookSettings';
+import { SaveStatusLine } from './SaveStatus';
 
-/** One notebook: its title page and the people on it. */
+/** One notebook: the manuscript with its live figures, and beneath it event sets, people and settings. */
 export default function NotebookPage() {
   const { notebookId = '' } = useParams();
   const notebook = useNotebook(notebookId);
-  const update = useUpdateNotebook(notebookId);
-  const remove = useDeleteNotebook(notebookId);
-  const navigate = useNavigate();
-
   if (notebook.error) return <ErrorNote error={notebook.error} action="Go back to the notebooks list." />;
   if (!notebook.data) return <Spinner size="3" />;
-  const nb = notebook.data;
-  const lead = nb.allowed.includes('delete');
+  return <NotebookWorkspace key={notebookId} notebook={notebook.data} />;
+}
+
+function NotebookWorkspace({ notebook }: { notebook: NonNullable<ReturnType<typeof useNotebook>['data']> }) {
+  const editable = notebook.allowed.includes('edit');
+  const { doc, status, error, ready } = useNotebookDocument(notebook.id, editable);
+  useSeriesLiveRefresh();
 
   return (
-    <Flex direction="column" gap="5">
-      <Box className="upwell-sheet" p="6">
-        <Flex justify="between" align="start" gap="4" wrap="wrap">
-          <div>
-            <Heading as="h1" size="7" mb="2">
-              {nb.title}
-            </Heading>
-            {nb.description && (
-              <Text as="p" className="upwell-prose" mb="2">
-                {nb.description}
-              </Text>
-            )}
-            <Text as="p" size="2" color="gray">
-              Lead author {nb.owner.name} · started {formatWhen(nb.createdAt)} · last edit {formatWhen(nb.updatedAt)}
-            </Text>
-          </div>
-          <Flex gap="2" align="center">
-            <Badge size="2" variant="soft">
-              You: {NOTEBOOK_ROLE_LABELS[nb.myRole]}
-            </Badge>
-            {nb.archived && <Badge color="gray">Archived</Badge>}
-          </Flex>
+    <Flex direction="column" gap="4">
+      <Flex justify="between" align="center" gap="3" wrap="wrap">
+        <Flex gap="2" align="center" wrap="wrap">
+          <Text size="2" color="gray">
+            {notebook.title}
+          </Text>
+          <Badge variant="soft" color={notebook.myRole === 'lead-author' ? 'teal' : 'gray'}>
+            {NOTEBOOK_ROLE_LABELS[notebook.myRole]}
+          </Badge>
+          {notebook.archived && <Badge color="gray">Archived</Badge>}
+          <Text size="1" color="gray">
+            Lead author {notebook.owner.name} · last edit {formatWhen(notebook.updatedAt)}
+          </Text>
         </Flex>
-        <Callout.Root mt="4" color="gray" variant="surface">
-          <Callout.Text>
-            The manuscript editor with live figures and numbers is not part of this version yet; this page manages the notebook and
-            who works on it.
-          </Callout.Text>
-        </Callout.Root>
+        <SaveStatusLine status={status} error={error} />
+      </Flex>
+      <FigureRefreshNotice notebookId={notebook.id} />
+      <Box className="upwell-sheet upwell-manuscript" px={{ initial: '4', sm: '8' }} py="6">
+        {ready ? <NotebookEditor notebookId={notebook.id} groupId={notebook.groupId} doc={doc} editable={editable} /> : <Spinner />}
       </Box>
-      <AccessList notebook={nb} />
-      {lead && (
-        <Flex gap="3">
-          <Button variant="soft" onClick={() => update.mutate({ archived: !nb.archived })} loading={update.isPending}>
-            {nb.archived ? 'Restore from archive' : 'Archive notebook'}
-          </Button>
-          <AlertDialog.Root>
-            <AlertDialog.Trigger>
-              <Button variant="soft" color="red">
-                Delete notebook
-              </Button>
-            </AlertDialog.Trigger>
-            <AlertDialog.Content maxWidth="440px">
-              <AlertDialog.Title>Delete “{nb.title}”?</AlertDialog.Title>
-              <AlertDialog.Description size="2">
-                The notebook and everyone’s roles on it are removed for good. Archive it instead to keep it out of the way.
-              </AlertDialog.Description>
-              <Flex gap="3" mt="4" justify="end">
-                <AlertDialog.Cancel>
-                  <Button variant="soft" color="gray">
-                    Keep it
-                  </Button>
-                </AlertDialog.Cancel>
-                <AlertDialog.Action>
-                  <Button color="red" onClick={() => remove.mutate(undefined, { onSuccess: () => navigate('/notebooks') })}>
-                    Delete for good
-                  </Button>
-                </AlertDialog.Action>
-              </Flex>
-            </AlertDialog.Content>
-          </AlertDialog.Root>
-        </Flex>
-      )}
-      <ErrorNote error={update.error ?? remove.error} />
+      <Tabs.Root defaultValue="events">
+        <Tabs.List aria-label="About this notebook">
+          <Tabs.Trigger value="events">Event sets</Tabs.Trigger>
+          <Tabs.Trigger value="people">People</Tabs.Trigger>
+          <Tabs.Trigger value="settings">Notebook</Tabs.Trigger>
+        </Tabs.List>
+        <Box pt="4">
+          <Tabs.Content value="events">
+            <EventSetsPanel notebookId={notebook.id} groupId={notebook.groupId} editable={editable} />
+          </Tabs.Content>
+          <Tabs.Content value="people">
+            <AccessList notebook={notebook} />
+          </Tabs.Content>
+          <Tabs.Content value="settings">
+            <Heading as="h2" size="4" mb="2">
+              This notebook
+            </Heading>
+            <NotebookSettings notebook={notebook} />
+          </Tabs.Content>
+        </Box>
+      </Tabs.Root>
     </Flex>
   );
 }
