@@ -36,16 +36,22 @@ function useRegisterUse(notebookId: string, json: string | null, as: Use) {
   }, [notebookId, json, as]);
 }
 
+/** The query of one recipe's result; figures, live numbers and the number picker all use it, so they share one cache entry. */
+export function figureQueryOptions(notebookId: string, recipe: FigureRecipe | null) {
+  return {
+    queryKey: recipe ? figureKeys.result(notebookId, recipe) : (['figure', notebookId, 'none'] as const),
+    queryFn: ({ signal }: { signal: AbortSignal }) => api<FigureResult>(`/notebooks/${notebookId}/figures`, { method: 'POST', body: { recipe }, signal }),
+    enabled: !!recipe,
+    // Results change only when the recipe or the data do; new versions invalidate them (useFigureLiveRefresh).
+    staleTime: 5 * 60_000,
+  };
+}
+
 /** Computes one recipe over the notebook group's series (null recipe: nothing to compute yet). */
 export function useFigure(notebookId: string, recipe: FigureRecipe | null, options: { as?: Use } = {}) {
   const json = recipe ? canonicalJSON(recipe) : null;
   useRegisterUse(notebookId, json, options.as ?? 'figure');
-  return useQuery({
-    queryKey: recipe ? figureKeys.result(notebookId, recipe) : ['figure', notebookId, 'none'],
-    queryFn: ({ signal }) => api<FigureResult>(`/notebooks/${notebookId}/figures`, { method: 'POST', body: { recipe }, signal }),
-    enabled: !!recipe,
-    staleTime: 5 * 60_000,
-  });
+  return useQuery(figureQueryOptions(notebookId, recipe));
 }
 
 /** What the last refresh did, for the notice. */
