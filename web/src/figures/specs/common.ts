@@ -73,7 +73,7 @@ export function eventLayers(events: EventSpan[]) {
         x: { field: 'peak', type: 'temporal' },
         y: { value: 0 },
         text: { field: 'label' },
-        color: { field: 'phase', type: 'nominal', scale: PHASE_SCALE, legend: null },
+        color: { field: 'phase', type: 'nominal', scale: PHASE_SCALE },
       },
     },
   ];

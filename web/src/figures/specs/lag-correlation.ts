@@ -16,6 +16,8 @@ export function lagCorrelationSpec(data: LagCorrelationData, recipe?: FigureReci
     ...l,
     from: l.lag - 0.45,
     to: l.lag + 0.45,
+    barFrom: l.lag - 0.35,
+    barTo: l.lag + 0.35,
     negThreshold: l.threshold === null ? null : -l.threshold,
     beyond: l.r !== null && l.threshold !== null && Math.abs(l.r) >= l.threshold ? 'beyond threshold' : 'within threshold',
   }));
@@ -24,10 +26,12 @@ export function lagCorrelationSpec(data: LagCorrelationData, recipe?: FigureReci
   const layers: unknown[] = [
     { mark: { type: 'rule', color: '#9aa0a3', strokeWidth: 0.75 }, encoding: { y: { datum: 0 } } },
     {
-      mark: { type: 'bar', width: { band: 0.7 } },
+      mark: { type: 'bar' },
       encoding: {
-        x,
+        x: { ...x, field: 'barFrom' },
+        x2: { field: 'barTo' },
         y: { field: 'r', type: 'quantitative', title: yTitle, scale: { domain: [-1, 1] } },
+        y2: { datum: 0 },
         color: {
           field: 'beyond',
           type: 'nominal',
