@@ -1,4 +1,4 @@
-import type { FigureResult, UsedSeries } from '@upwell/common';
+import type { FigureResult, SeriesSummary, UsedSeries } from '@upwell/common';
 
 /** Builders of sample figure results for component and spec tests (not used by the app). */
 export const SERIES_ID = '6f1c2a9e-3b1d-4c55-9a0e-1f2d3c4b5a60';
@@ -20,6 +20,27 @@ export function result(kind: string, data: Record<string, unknown>, over: Partia
     engineVersion: 'test',
     cacheKey: 'k',
     cached: false,
+    ...over,
+  };
+}
+
+/** A series as the library lists it. */
+export function seriesSummary(over: Partial<SeriesSummary> = {}): SeriesSummary {
+  return {
+    id: SERIES_ID,
+    groupId: 'g1',
+    name: 'DIC 0–100 m',
+    kind: 'carbon-inventory',
+    variable: 'dic',
+    units: 'Pg C',
+    region: 'tropical Pacific',
+    depthLayer: '0–100 m',
+    source: 'test',
+    origin: 'model-output',
+    notes: '',
+    latest: { number: 3, start: '1980-01', end: '2020-12', createdAt: '2024-01-01T00:00:00Z' },
+    sparkline: [],
+    updatedAt: '2024-01-01T00:00:00Z',
     ...over,
   };
 }
