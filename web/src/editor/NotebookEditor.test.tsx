@@ -2,6 +2,7 @@ import { act, fireEvent, screen, waitFor } from '@testing-library/react';
 import type { Editor } from '@tiptap/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import * as Y from 'yjs';
+import { Fragment } from '@tiptap/pm/model';
 import { DOCUMENT_FIELD } from '@upwell/common';
 import { result, SERIES_ID, seriesSummary } from '../figures/test-data';
 import { mockFetch, renderWithQuery } from '../figures/test-render';
@@ -87,6 +88,24 @@ describe('NotebookEditor', () => {
     expect(number).toMatchObject({ key: 'trend', precision: 1, figureId: fig.attrs.id, recipe: fig.attrs.recipe });
     const live = await screen.findByRole('button', { name: /Live number: linear trend/ });
     await waitFor(() => expect(live.textContent).toBe('−0.4\u00a0Pg C decade⁻¹'));
+
+    // The number follows its figure when the figure's settings change.
+    fireEvent.click(screen.getByRole('button', { name: 'Figure 1 settings' }));
+    fireEvent.change(await screen.findByLabelText('Version of series'), { target: { value: '2' } });
+    fireEvent.submit(screen.getByRole('form', { name: 'Figure settings' }));
+    const numberRecipe = () => {
+      let r: unknown = null;
+      editor().state.doc.descendants((n) => {
+        if (n.type.name === 'liveNumber') r = n.attrs.recipe;
+      });
+      return r as { series: { version: unknown } } | null;
+    };
+    await waitFor(() => expect(numberRecipe()?.series.version).toBe(2));
+    let figureVersion: unknown = null;
+    editor().state.doc.descendants((n) => {
+      if (n.type.name === 'liveFigure') figureVersion = n.attrs.recipe.series.version;
+    });
+    expect(figureVersion).toBe(2);
   });
 
   it('undoes the person’s own change through Yjs with Mod-z', async () => {
@@ -118,5 +137,24 @@ describe('NotebookEditor', () => {
     expect(screen.queryByLabelText(/Caption of/)).toBeNull();
     expect(editor!.isEditable).toBe(false);
     expect(screen.getByText('DIC anomaly')).toBeTruthy();
+  });
+});
+
+describe('pasting a figure', () => {
+  it('gives the pasted copy a new id', async () => {
+    const { freshFigureIds } = await import('./extensions');
+    const { upwellSchema } = await import('@upwell/common');
+    const schema = upwellSchema();
+    const fig = schema.nodes.liveFigure.create({ id: 'f1', recipe: null, caption: 'c' });
+    const quote = schema.nodes.blockquote.create(null, [schema.nodes.liveFigure.create({ id: 'f2', recipe: null, caption: '' })]);
+    const out = freshFigureIds(Fragment.from([fig, quote]));
+    const ids: string[] = [];
+    out.descendants((n) => {
+      if (n.type.name === 'liveFigure') ids.push(n.attrs.id);
+    });
+    expect(ids).toHaveLength(2);
+    expect(ids).not.toContain('f1');
+    expect(ids).not.toContain('f2');
+    expect(out.firstChild!.attrs.caption).toBe('c');
   });
 });

@@ -1,5 +1,7 @@
 import { Extension, type AnyExtension } from '@tiptap/core';
 import Collaboration from '@tiptap/extension-collaboration';
+import { Fragment, Slice, type Node as PMNode } from '@tiptap/pm/model';
+import { Plugin, PluginKey } from '@tiptap/pm/state';
 import { ReactNodeViewRenderer } from '@tiptap/react';
 import { DOCUMENT_FIELD, LiveFigure, LiveNumber, upwellDocumentExtensions } from '@upwell/common';
 import type * as Y from 'yjs';
@@ -12,7 +14,21 @@ export const LiveFigureWithView = LiveFigure.extend({
   addNodeView() {
     return ReactNodeViewRenderer(LiveFigureNodeView);
   },
+  addProseMirrorPlugins() {
+    // A pasted figure is a new figure: it gets its own id, so comments and numbers stay with the original.
+    return [new Plugin({ key: new PluginKey('upwellFigureIds'), props: { transformPasted: (slice) => new Slice(freshFigureIds(slice.content), slice.openStart, slice.openEnd) } })];
+  },
 });
+
+/** The fragment with every live figure given a new id. */
+export function freshFigureIds(fragment: Fragment): Fragment {
+  const nodes: PMNode[] = [];
+  fragment.forEach((node) => {
+    if (node.type.name === 'liveFigure') nodes.push(node.type.create({ ...node.attrs, id: crypto.randomUUID() }, node.content, node.marks));
+    else nodes.push(node.copy(freshFigureIds(node.content)));
+  });
+  return Fragment.fromArray(nodes);
+}
 
 /** The live number with its React node view (inline). */
 export const LiveNumberWithView = LiveNumber.extend({
