@@ -63,11 +63,20 @@ export function LiveNumberView({ notebookId, recipe, numberKey, precision, figur
         role="button"
         aria-label={`Live number: ${number?.label ?? numberKey}, ${state === 'computing' ? 'computing' : text}`}
         aria-describedby={tipId}
+        aria-expanded={open}
+        // Enter or Space shows where the number comes from (a button that discloses its source).
+        onClick={() => setOpen((o) => !o)}
         onMouseEnter={() => setOpen(true)}
         onMouseLeave={() => setOpen(false)}
         onFocus={() => setOpen(true)}
         onBlur={() => setOpen(false)}
-        onKeyDown={(e) => e.key === 'Escape' && setOpen(false)}
+        onKeyDown={(e) => {
+          if (e.key === 'Escape') setOpen(false);
+          if (e.key === 'Enter' || e.key === ' ') {
+            e.preventDefault();
+            setOpen((o) => !o);
+          }
+        }}
       >
         {state === 'unavailable' && <span aria-hidden>⚠ </span>}
         {text}
