@@ -1,0 +1,3 @@
+export { NotebookEditor, type NotebookEditorProps } from './NotebookEditor';
+export { FigureRefreshNotice } from '../figures/FigureRefreshNotice';
+export { useFigure, useFigureLiveRefresh, figureKeys } from '../api/figures';

@@ -1,0 +1,20 @@
+/**
+ * JSON with object keys sorted at every depth, so two equal recipes give the
+ * same text whatever order their keys were written in (query keys rely on it).
+ */
+export function canonicalJSON(value: unknown): string {
+  return JSON.stringify(sortKeys(value));
+}
+
+function sortKeys(value: unknown): unknown {
+  if (Array.isArray(value)) return value.map(sortKeys);
+  if (value && typeof value === 'object') {
+    const out: Record<string, unknown> = {};
+    for (const key of Object.keys(value).sort()) {
+      const v = (value as Record<string, unknown>)[key];
+      if (v !== undefined) out[key] = sortKeys(v);
+    }
+    return out;
+  }
+  return value;
+}

@@ -1,0 +1,124 @@
+import type { FigureKind, FigureResult, UsedSeries } from '@upwell/common';
+
+/**
+ * Plot-ready data of each recipe kind, as this client expects the figure
+ * route to send it in `FigureResult.data`. Months are "YYYY-MM"; a missing
+ * value is null. This file is the one place to adapt when the server's
+ * shapes are settled.
+ */
+export type Phase = 'warm' | 'cold';
+
+/** One detected or saved event. */
+export interface EventSpan {
+  phase: Phase;
+  start: string;
+  peak: string;
+  end: string;
+}
+
+export interface TimeseriesData {
+  points: { month: string; value: number | null }[];
+  events: EventSpan[];
+  units: string;
+  show: 'raw' | 'anomaly';
+  /** Name of the plotted series, for the axis title. */
+  name?: string;
+}
+
+export interface SeasonalCycleData {
+  months: { month: number; mean: number | null; sd: number | null; min: number | null; max: number | null; n: number }[];
+  units: string;
+  name?: string;
+}
+
+export interface LagCorrelationData {
+  /** Positive lag: the index leads the series by that many months. */
+  lags: { lag: number; r: number | null; n: number; nEff: number | null; p: number | null; threshold: number | null }[];
+  strongest: { lag: number; r: number; p: number | null } | null;
+  method?: 'pearson' | 'spearman';
+}
+
+export interface CompositeData {
+  /** Months from the event peak, one per position of mean/lower/upper/n. */
+  offsets: number[];
+  mean: (number | null)[];
+  lower: (number | null)[];
+  upper: (number | null)[];
+  n: number[];
+  /** One member per event: its peak month and its values at each offset. */
+  members: { at: string; values: (number | null)[] }[];
+  units: string;
+  phase?: Phase;
+}
+
+export interface EventTableData {
+  events: (EventSpan & {
+    months: number;
+    peakValue: number | null;
+    strength: string;
+    carbon: { seriesId: string; name: string; PgC: number | null }[];
+  })[];
+  indexUnits?: string;
+}
+
+export interface BudgetData {
+  months: string[];
+  terms: { name: string; values: (number | null)[] }[];
+  tendency: (number | null)[];
+  residual: (number | null)[];
+  rmsResidual: number | null;
+  relativeResidual: number | null;
+  units: string;
+}
+
+export interface HovmollerData {
+  cells: { month: string; lat: number; value: number | null }[];
+  units: string;
+}
+
+export interface ScatterData {
+  points: { x: number | null; y: number | null; month: string }[];
+  fit: { slope: number; intercept: number; r2: number; n: number } | null;
+  xUnits: string;
+  yUnits: string;
+  xName?: string;
+  yName?: string;
+}
+
+/** Data type of each kind. */
+export interface FigureDataByKind {
+  timeseries: TimeseriesData;
+  'seasonal-cycle': SeasonalCycleData;
+  'lag-correlation': LagCorrelationData;
+  composite: CompositeData;
+  'event-table': EventTableData;
+  budget: BudgetData;
+  hovmoller: HovmollerData;
+  scatter: ScatterData;
+}
+
+/** What to call an axis when the server gave no units: say so rather than print a bare number. */
+export const NO_UNITS = 'units not given';
+
+/**
+ * Reads a result's data as the kind's interface, filling units the data
+ * leave out from the versions used (first bound series = y, index = x), so
+ * every axis carries units.
+ */
+export function readFigureData<K extends FigureKind>(kind: K, result: Pick<FigureResult, 'data' | 'used'>): FigureDataByKind[K] {
+  const d = { ...(result.data as Record<string, unknown>) };
+  const used: UsedSeries[] = result.used ?? [];
+  const unitsOf = (i: number) => used[i]?.units || '';
+  if (kind === 'scatter') {
+    // The index is bound first, the series second.
+    if (!d.xUnits) d.xUnits = unitsOf(0);
+    if (!d.yUnits) d.yUnits = unitsOf(1) || unitsOf(0);
+    if (!d.xName) d.xName = used[0]?.name;
+    if (!d.yName) d.yName = used[1]?.name;
+  } else if (kind === 'lag-correlation' || kind === 'composite') {
+    if (!d.units) d.units = unitsOf(1) || unitsOf(0);
+  } else if (!d.units) {
+    d.units = unitsOf(0);
+  }
+  return d as unknown as FigureDataByKind[K];
+}
