@@ -1,9 +1,8 @@
 import { Injectable } from '@nestjs/common';
-import type { FigureResult } from '@upwell/common';
 
-/** A stored answer: the result without its per-request fields, and its size in bytes. */
+/** A stored answer: the JSON of the result without its per-request `cached` flag, and its size. */
 interface Entry {
-  result: Omit<FigureResult, 'cached'>;
+  json: string;
   bytes: number;
 }
 
@@ -31,8 +30,8 @@ export class FigureCache {
 
   constructor(readonly limits: FigureCacheLimits = DEFAULT_FIGURE_CACHE_LIMITS) {}
 
-  /** The stored result for a key, marking it recently used; undefined on a miss. */
-  get(key: string): Omit<FigureResult, 'cached'> | undefined {
+  /** The stored JSON for a key, marking it recently used; undefined on a miss. */
+  get(key: string): string | undefined {
     const e = this.entries.get(key);
     if (!e) {
       this.misses++;
@@ -41,16 +40,16 @@ export class FigureCache {
     this.hits++;
     this.entries.delete(key);
     this.entries.set(key, e);
-    return e.result;
+    return e.json;
   }
 
   /** Stores a result, evicting the least recently used entries beyond the bounds; one larger than maxBytes is not kept. */
-  set(key: string, result: Omit<FigureResult, 'cached'>): void {
-    // UTF-16 length × 2 bounds the UTF-8 JSON size from above without encoding it.
-    const bytes = JSON.stringify(result).length * 2;
+  set(key: string, json: string): void {
+    // A JS string holds UTF-16: two bytes per code unit is what it occupies in memory.
+    const bytes = json.length * 2;
     this.delete(key);
     if (bytes > this.limits.maxBytes) return;
-    this.entries.set(key, { result, bytes });
+    this.entries.set(key, { json, bytes });
     this.totalBytes += bytes;
     while (this.entries.size > this.limits.maxEntries || this.totalBytes > this.limits.maxBytes) {
       const oldest = this.entries.keys().next().value as string;

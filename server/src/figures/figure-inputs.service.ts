@@ -11,8 +11,12 @@ import type { LoadedEventSet, LoadedSeries, LoadedZonalField, NamedBinding } fro
 export interface ResolvedBinding {
   path: string;
   series: Series;
-  version: SeriesVersion;
+  number: number;
+  valuesSha256: string;
 }
+
+/** Most (series, version) hashes remembered; versions are immutable, so this only bounds memory. */
+const VERSION_MEMO_MAX = 50_000;
 
 /** An event set with the hash of its events, for the cache key. */
 export interface ResolvedEventSet extends LoadedEventSet {
@@ -25,6 +29,10 @@ export interface ResolvedEventSet extends LoadedEventSet {
  */
 @Injectable()
 export class FigureInputsService {
+  // A version's values never change, so its hash can be remembered: a cached figure then costs
+  // the notebook check and one series query, not a version query too.
+  private readonly versionSha = new Map<string, string>();
+
   constructor(private readonly em: EntityManager) {}
 
   /**
@@ -44,36 +52,43 @@ export class FigureInputsService {
       const number = b.version === 'latest' ? series.latestVersion : b.version;
       return { b, series, number };
     });
-    const versions = await this.em.find(SeriesVersion, { $or: wanted.map((w) => ({ series: w.series.id, number: w.number })) });
-    const byKey = new Map(versions.map((v) => [`${v.series.id}@${v.number}`, v]));
+    const unknown = wanted.filter((w) => !this.versionSha.has(`${w.series.id}@${w.number}`));
+    if (unknown.length) {
+      const versions = await this.em.find(SeriesVersion, { $or: unknown.map((w) => ({ series: w.series.id, number: w.number })) }, { fields: ['series', 'number', 'valuesSha256'] });
+      if (this.versionSha.size > VERSION_MEMO_MAX) this.versionSha.clear();
+      for (const v of versions) this.versionSha.set(`${v.series.id}@${v.number}`, v.valuesSha256);
+    }
     return wanted.map(({ b, series, number }) => {
-      const version = byKey.get(`${series.id}@${number}`);
-      if (!version) {
+      const sha = this.versionSha.get(`${series.id}@${number}`);
+      if (sha === undefined) {
         throw new NotFoundException(`${b.path}: series "${series.name}" has versions 1 to ${series.latestVersion}; there is no version ${number}`);
       }
-      return { path: b.path, series, version };
+      return { path: b.path, series, number, valuesSha256: sha };
     });
   }
 
   /** Loads and decodes the values of resolved bindings, by path. */
   async load(resolved: ResolvedBinding[]): Promise<Map<string, LoadedSeries>> {
-    const versions = [...new Set(resolved.map((r) => r.version))];
-    if (versions.length) await this.em.populate(versions, ['values']);
-    const decoded = new Map(versions.map((v) => [v, decodeValues(v.values)]));
+    if (resolved.length === 0) return new Map();
+    const versions = await this.em.find(SeriesVersion, { $or: resolved.map((r) => ({ series: r.series.id, number: r.number })) }, { populate: ['values'] });
+    const decoded = new Map(versions.map((v) => [`${v.series.id}@${v.number}`, { start: v.start, values: decodeValues(v.values) }]));
     return new Map(
-      resolved.map((r) => [
-        r.path,
-        {
+      resolved.map((r) => {
+        const v = decoded.get(`${r.series.id}@${r.number}`);
+        // Versions are never deleted on their own; a series deleted since resolve() is gone for good.
+        if (!v) throw new NotFoundException(`${r.path}: series "${r.series.name}" was deleted`);
+        const loaded: LoadedSeries = {
           seriesId: r.series.id,
           name: r.series.name,
-          version: r.version.number,
+          version: r.number,
           units: r.series.units,
           origin: r.series.origin,
-          valuesSha256: r.version.valuesSha256,
-          start: r.version.start,
-          values: decoded.get(r.version)!,
-        },
-      ]),
+          valuesSha256: r.valuesSha256,
+          start: v.start,
+          values: v.values,
+        };
+        return [r.path, loaded];
+      }),
     );
   }
 

@@ -1,6 +1,7 @@
-import { Body, Controller, HttpCode, Param, Post } from '@nestjs/common';
+import { Body, Controller, HttpCode, Param, Post, Res } from '@nestjs/common';
 import { ApiBearerAuth, ApiOperation, ApiTags } from '@nestjs/swagger';
 import { computeFigureRequestSchema } from '@upwell/common';
+import type { Response } from 'express';
 import { CurrentUser } from '../auth/current-user.decorator';
 import { ApiJsonBody } from '../common/api-docs';
 import { uuidParam } from '../common/ids';
@@ -23,11 +24,13 @@ export class FiguresController {
       'the newest version; repeats are served from a cache keyed by the recipe and the versions used.',
   })
   @ApiJsonBody(computeFigureRequestSchema)
-  compute(
+  async compute(
     @CurrentUser() user: User,
     @Param('notebookId', uuidParam('notebookId')) notebookId: string,
     @Body(new ZodValidationPipe(computeFigureRequestSchema)) body: ComputeFigureBody,
-  ) {
-    return this.figures.compute(user, notebookId, body);
+    @Res() res: Response,
+  ): Promise<void> {
+    // The service answers JSON text (serialized once, reused from the cache), so it is sent as is.
+    res.status(200).type('application/json').send(await this.figures.compute(user, notebookId, body));
   }
 }

@@ -5,7 +5,7 @@ import type { User } from '../users/user.entity';
 import { figureCacheKey } from './cache-key';
 import { FigureCache } from './figure-cache';
 import { FigureInputsService, type ResolvedEventSet } from './figure-inputs.service';
-import { presentFigureResult } from './figures.presenter';
+import { presentFigureJson } from './figures.presenter';
 import type { RecipeInputs, RecipeOutput } from './loaded-inputs';
 import { MODEL_OUTPUT_CAUTION } from './methods';
 import { RECIPES } from './recipes';
@@ -36,8 +36,11 @@ export class FiguresService {
     private readonly cache: FigureCache,
   ) {}
 
-  /** Anyone with a role on the notebook may compute its figures. */
-  async compute(user: User, notebookId: string, body: ComputeFigureBody): Promise<FigureResult> {
+  /**
+   * Anyone with a role on the notebook may compute its figures. Answers the result as JSON text:
+   * it is serialized once, when computed, and a cached answer is sent without serializing again.
+   */
+  async compute(user: User, notebookId: string, body: ComputeFigureBody): Promise<string> {
     const { notebook } = await this.policy.authorize(user, notebookId, 'read');
     const groupId = notebook.group.id;
     const recipe = body.recipe;
@@ -48,12 +51,12 @@ export class FiguresService {
     const field = recipe.kind === 'hovmoller' ? await this.inputs.zonalField(groupId, recipe.zonalFieldId) : null;
     const cacheKey = figureCacheKey({
       recipe,
-      series: resolved.map((r) => ({ path: r.path, seriesId: r.series.id, version: r.version.number, valuesSha256: r.version.valuesSha256 })),
+      series: resolved.map((r) => ({ path: r.path, seriesId: r.series.id, version: r.number, valuesSha256: r.valuesSha256 })),
       eventSet: eventSet && { id: eventSet.id, updatedAt: eventSet.updatedAt, eventsSha256: eventSet.eventsSha256 },
       zonalField: field && { id: field.id, months: field.months, latitudes: field.latitudes.length },
     });
     const hit = this.cache.get(cacheKey);
-    if (hit) return presentFigureResult(hit, true);
+    if (hit !== undefined) return presentFigureJson(hit, true);
 
     const inputs: RecipeInputs = {
       series: await this.inputs.load(resolved),
@@ -73,8 +76,9 @@ export class FiguresService {
       engineVersion: ENGINE_VERSION,
       cacheKey,
     };
-    this.cache.set(cacheKey, stored);
-    return presentFigureResult(stored, false);
+    const json = JSON.stringify(stored);
+    this.cache.set(cacheKey, json);
+    return presentFigureJson(json, false);
   }
 }
 
