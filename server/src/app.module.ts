@@ -16,6 +16,8 @@ import { RealtimeModule } from './realtime/realtime.module';
 import { SeriesModule } from './series/series.module';
 import { UploadsModule } from './uploads/uploads.module';
 import { FieldsModule } from './fields/fields.module';
+import { FiguresModule } from './figures/figures.module';
+import { EventSetsModule } from './event-sets/event-sets.module';
 
 /** The whole server, built for one resolved configuration. */
 @Module({})
@@ -42,6 +44,8 @@ export class AppModule {
         AnalysisModule,
         UploadsModule,
         FieldsModule,
+        FiguresModule,
+        EventSetsModule,
       ],
       controllers: [HealthController],
       providers: [MigrateOnStart],

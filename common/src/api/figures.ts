@@ -208,3 +208,135 @@ export const eventSetSchema = z.object({
   updatedAt: z.string(),
 });
 export type EventSetView = z.infer<typeof eventSetSchema>;
+
+// ── Additions for the figure and event-set routes ────────────────────────────────────────
+
+/**
+ * Version of the engine's figure results. Part of every figure's cache key: bump it whenever a
+ * change to the engine or to a recipe changes what a figure computes, so stored answers expire.
+ */
+export const ENGINE_VERSION = '1.0.0';
+
+/** The operational rule on its own (the `rule` branch of eventSourceSchema), for detection requests. */
+export const eventRuleSchema = eventSourceSchema.options[0];
+export type EventRule = z.input<typeof eventRuleSchema>;
+
+/**
+ * Body of POST /api/notebooks/:notebookId/event-sets/detect: detect events in an index by the rule
+ * without saving them, so the authors can edit them first. The index anomaly is made with
+ * `anomaly` (base period, climatology, detrend, standardize); its `smooth` is replaced by the
+ * rule's running mean, so the index is never smoothed twice.
+ */
+export const detectEventSetRequestSchema = z.strictObject({
+  index: binding,
+  rule: eventRuleSchema.prefault(DEFAULT_EVENT_SOURCE),
+  anomaly: anomalyOptionsSchema.prefault({}),
+});
+export type DetectEventSetRequest = z.input<typeof detectEventSetRequestSchema>;
+
+/** One event as a figure or a detection shows it; peakValue and strength are null where the index has no value at the peak. */
+export interface FigureEvent {
+  phase: 'warm' | 'cold';
+  start: string;
+  peak: string;
+  end: string;
+  months: number;
+  peakValue: number | null;
+  strength: 'weak' | 'moderate' | 'strong' | 'very strong' | null;
+  label: string;
+}
+
+/** Answer of the detect route: the events, ready to edit and save as an event set. */
+export interface DetectedEvents {
+  index: UsedSeries;
+  events: FigureEvent[];
+  methods: string;
+  warnings: string[];
+}
+
+/** A month's value, the record vega-lite plots on a temporal x axis. */
+export interface MonthValue {
+  month: string;
+  value: number | null;
+}
+
+/** `data` of a timeseries figure: the series (raw or anomaly), its trend, and the events to shade. */
+export interface TimeseriesData {
+  units: string;
+  show: 'raw' | 'anomaly';
+  points: MonthValue[];
+  events: FigureEvent[];
+  trend: { perDecade: number | null; perDecadeStdErr: number | null; r2: number | null; n: number };
+}
+
+/** `data` of a seasonal-cycle figure: per calendar month (1 = January) over the base period. */
+export interface SeasonalCycleData {
+  units: string;
+  base: { from: string; to: string };
+  months: { month: number; name: string; mean: number | null; sd: number | null; min: number | null; max: number | null; n: number; years: number }[];
+}
+
+/** One lag of a lag-correlation figure, with the |r| needed for significance at alpha. */
+export interface LagRow {
+  lag: number;
+  r: number | null;
+  n: number;
+  nEff: number | null;
+  p: number | null;
+  threshold: number | null;
+}
+
+/** `data` of a lag-correlation figure (positive lag: the index leads the series). */
+export interface LagCorrelationData {
+  method: 'pearson' | 'spearman';
+  alpha: number;
+  lags: LagRow[];
+  strongest: LagRow | null;
+}
+
+/** `data` of a composite figure: mean and interval per offset, and each member for spaghetti lines. */
+export interface CompositeData {
+  phase: 'warm' | 'cold';
+  units: string;
+  confidence: number;
+  events: FigureEvent[];
+  offsets: { offset: number; mean: number | null; lower: number | null; upper: number | null; n: number }[];
+  members: { event: string; offset: number; value: number | null }[];
+}
+
+/** How a carbon series' change over an event was found. */
+export type CarbonTreatment = 'rate-integrated' | 'inventory-difference' | null;
+
+/** `data` of an event table: one row per event; `carbon[seriesId]` is the change in Pg C (null when it cannot be computed). */
+export interface EventTableData {
+  carbonSeries: { seriesId: string; name: string; units: string; treatment: CarbonTreatment }[];
+  rows: (FigureEvent & { carbon: Record<string, number | null> })[];
+}
+
+/** `data` of a budget figure: month records for lines, and one record per term and month for stacking. */
+export interface BudgetData {
+  units: string;
+  termNames: string[];
+  months: { month: string; tendency: number | null; sumOfTerms: number | null; residual: number | null }[];
+  terms: { month: string; term: string; value: number | null }[];
+  rmsResidual: number | null;
+  relativeResidual: number | null;
+}
+
+/** `data` of a time–latitude diagram: one record per month and latitude. */
+export interface HovmollerData {
+  units: string;
+  show: 'raw' | 'anomaly';
+  latitudes: number[];
+  cells: { month: string; lat: number; value: number | null }[];
+}
+
+/** `data` of a scatter figure: pairs (index anomaly at t, series anomaly at t + lag) and the OLS line. */
+export interface ScatterData {
+  lag: number;
+  xUnits: string;
+  yUnits: string;
+  points: { month: string; x: number; y: number }[];
+  fit: { slope: number | null; intercept: number | null; slopeStdErr: number | null; r2: number | null; n: number };
+  line: { x: number; y: number }[];
+}

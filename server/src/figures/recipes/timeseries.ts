@@ -1,0 +1,64 @@
+/**
+ * Timeseries recipe: a series (raw or anomalies) with its linear trend, and warm/cold events of an
+ * index (the series itself when no index is bound) shaded behind it.
+ *
+ * data: TimeseriesData — `points` [{ month, value }], `events` [{ phase, start, peak, end, months,
+ * peakValue, strength, label }], `trend` { perDecade, perDecadeStdErr, r2, n } of the values shown.
+ *
+ * numbers:
+ * - `trend.perDecade` — OLS slope of the shown values, series units per decade
+ * - `events.warm.count`, `events.cold.count` — number of warm / cold events
+ */
+import { trend } from '@upwell/common';
+import { seriesAnomaly } from '../figure-anomaly';
+import { resolveEvents } from '../figure-events';
+import { seriesAt } from '../series-input';
+import { describeAnomaly, methodsSentence } from '../methods';
+import { bindingAt, monthRecords, type FigureRecipeHandler } from './recipe';
+
+/** The timeseries recipe. */
+export const timeseriesRecipe: FigureRecipeHandler<'timeseries'> = {
+  kind: 'timeseries',
+  bindings: (r) => [bindingAt('series', r.series), ...(r.index ? [bindingAt('index', r.index)] : [])],
+  compute(r, inputs) {
+    const series = seriesAt(inputs, 'series');
+    const index = r.index ? seriesAt(inputs, 'index') : series;
+    const warnings: string[] = [];
+    let shown = { start: series.start, values: series.values };
+    if (r.show === 'anomaly') {
+      const a = seriesAnomaly(series, r.anomaly);
+      warnings.push(...a.warnings);
+      shown = a;
+    }
+    const ev = resolveEvents(r.events, index, r.anomaly, inputs.eventSet);
+    warnings.push(...ev.warnings.filter((w) => !warnings.includes(w)));
+    const t = trend({ series: shown, per: 'decade' });
+    const units = r.show === 'anomaly' && r.anomaly.standardize ? 'standard deviations' : series.units;
+    const count = (phase: string) => ev.events.filter((e) => e.phase === phase).length;
+    const used = index === series ? [series] : [series, index];
+    return {
+      data: {
+        units,
+        show: r.show,
+        points: monthRecords(shown.start, shown.values),
+        events: ev.events,
+        trend: { perDecade: t.slope, perDecadeStdErr: t.slopeStdErr, r2: t.r2, n: t.n },
+      },
+      numbers: [
+        { key: 'trend.perDecade', label: `Linear trend of ${series.name}${r.show === 'anomaly' ? ' anomaly' : ''}`, value: t.slope, units: `${units}/decade` },
+        { key: 'events.warm.count', label: 'Number of warm events', value: count('warm'), units: 'events' },
+        { key: 'events.cold.count', label: 'Number of cold events', value: count('cold'), units: 'events' },
+      ],
+      methods: methodsSentence(
+        [
+          r.show === 'anomaly' ? `${series.name} as ${describeAnomaly(r.anomaly)}` : `${series.name} as stored`,
+          'trend by ordinary least squares, per decade',
+          `shaded ${ev.clause}`,
+        ],
+        used,
+      ),
+      cautions: [],
+      warnings,
+    };
+  },
+};
