@@ -1,4 +1,11 @@
-import type { FigureKind, FigureResult, UsedSeries } from '@upwell/common';
+import type {
+  BudgetData as ServerBudgetData,
+  CompositeData as ServerCompositeData,
+  EventTableData as ServerEventTableData,
+  FigureKind,
+  FigureResult,
+  UsedSeries,
+} from '@upwell/common';
 
 /**
  * Plot-ready data of each recipe kind, as this client expects the figure
@@ -106,7 +113,7 @@ export const NO_UNITS = 'units not given';
  * every axis carries units.
  */
 export function readFigureData<K extends FigureKind>(kind: K, result: Pick<FigureResult, 'data' | 'used'>): FigureDataByKind[K] {
-  const d = { ...(result.data as Record<string, unknown>) };
+  const d = { ...fromServerShape(kind, result.data as Record<string, unknown>) };
   const used: UsedSeries[] = result.used ?? [];
   const unitsOf = (i: number) => used[i]?.units || '';
   if (kind === 'scatter') {
@@ -121,4 +128,67 @@ export function readFigureData<K extends FigureKind>(kind: K, result: Pick<Figur
     d.units = unitsOf(0);
   }
   return d as unknown as FigureDataByKind[K];
+}
+
+/**
+ * The server sends composite, event-table and budget data as records (one per
+ * offset, event or month and term); the spec builders here take columns.
+ * Other kinds arrive in the shape the specs read.
+ */
+function fromServerShape(kind: FigureKind, data: Record<string, unknown>): Record<string, unknown> {
+  if (kind === 'composite' && Array.isArray(data.offsets) && typeof data.offsets[0] === 'object') {
+    const c = data as unknown as ServerCompositeData;
+    const atOf = (event: string) => c.events.find((e) => e.peak === event || e.start === event)?.peak ?? event;
+    const byMember = new Map<string, Map<number, number | null>>();
+    for (const m of c.members) {
+      if (!byMember.has(m.event)) byMember.set(m.event, new Map());
+      byMember.get(m.event)!.set(m.offset, m.value);
+    }
+    const offsets = c.offsets.map((o) => o.offset);
+    return {
+      offsets,
+      mean: c.offsets.map((o) => o.mean),
+      lower: c.offsets.map((o) => o.lower),
+      upper: c.offsets.map((o) => o.upper),
+      n: c.offsets.map((o) => o.n),
+      members: [...byMember].map(([event, values]) => ({ at: atOf(event), values: offsets.map((o) => values.get(o) ?? null) })),
+      units: c.units,
+      phase: c.phase,
+    };
+  }
+  if (kind === 'event-table' && Array.isArray(data.rows)) {
+    const t = data as unknown as ServerEventTableData;
+    return {
+      events: t.rows.map((r) => ({
+        phase: r.phase,
+        start: r.start,
+        peak: r.peak,
+        end: r.end,
+        months: r.months,
+        peakValue: r.peakValue,
+        strength: r.strength ?? '',
+        carbon: t.carbonSeries.map((c) => ({ seriesId: c.seriesId, name: c.name, PgC: r.carbon[c.seriesId] ?? null })),
+      })),
+    };
+  }
+  if (kind === 'budget' && Array.isArray(data.termNames)) {
+    const b = data as unknown as ServerBudgetData;
+    const months = b.months.map((m) => m.month);
+    const index = new Map(months.map((m, i) => [m, i]));
+    const terms = b.termNames.map((name) => {
+      const values: (number | null)[] = months.map(() => null);
+      for (const t of b.terms) if (t.term === name) values[index.get(t.month)!] = t.value;
+      return { name, values };
+    });
+    return {
+      months,
+      terms,
+      tendency: b.months.map((m) => m.tendency),
+      residual: b.months.map((m) => m.residual),
+      rmsResidual: b.rmsResidual,
+      relativeResidual: b.relativeResidual,
+      units: b.units,
+    };
+  }
+  return data;
 }
