@@ -1,13 +1,17 @@
+import { Spinner } from '@radix-ui/themes';
+import { lazy, Suspense } from 'react';
 import { createBrowserRouter, Navigate } from 'react-router';
 import { AppShell } from './components/AppShell';
 import AccountPage from './pages/Account';
 import GroupPage from './pages/Group';
-import NotebookPage from './pages/Notebook';
 import NotebooksPage from './pages/Notebooks';
 import SeriesPage from './pages/Series';
 import SeriesLibraryPage from './pages/SeriesLibrary';
 import SignInPage from './pages/SignIn';
 import SignUpPage from './pages/SignUp';
+
+// The editor (Tiptap, ProseMirror, Yjs) loads with the first notebook opened, not with the sign-in page.
+const NotebookPage = lazy(() => import('./pages/Notebook'));
 
 /** Every screen of the web client. */
 export const routes = [
@@ -19,7 +23,14 @@ export const routes = [
     children: [
       { index: true, element: <Navigate to="/notebooks" replace /> },
       { path: 'notebooks', element: <NotebooksPage /> },
-      { path: 'notebooks/:notebookId', element: <NotebookPage /> },
+      {
+        path: 'notebooks/:notebookId',
+        element: (
+          <Suspense fallback={<Spinner size="3" />}>
+            <NotebookPage />
+          </Suspense>
+        ),
+      },
       { path: 'series', element: <SeriesLibraryPage /> },
       { path: 'series/:seriesId', element: <SeriesPage /> },
       { path: 'group', element: <GroupPage /> },
