@@ -2,7 +2,7 @@ import { EditorContent, useEditor, type Editor } from '@tiptap/react';
 import { useEffect, useMemo, useRef, useState } from 'react';
 import type * as Y from 'yjs';
 import { insertLiveNumber } from './commands';
-import { notebookEditorExtensions } from './extensions';
+import { notebookEditorExtensions, type PresenceOptions } from './extensions';
 import { createFigureIndex } from './figure-index';
 import { NotebookEditorContext } from './notebook-context';
 import { NumberPicker } from './NumberPicker';
@@ -18,6 +18,8 @@ export interface NotebookEditorProps {
   /** False for reviewers and readers: the text, figures and numbers show, nothing changes. */
   editable: boolean;
   onReady?: (editor: Editor) => void;
+  /** Presence of the live transport, for other people's carets and selections. */
+  presence?: PresenceOptions;
 }
 
 /**
@@ -25,7 +27,7 @@ export interface NotebookEditorProps {
  * co-edited through Yjs (undo is the Yjs binding's own, so it undoes only
  * this person's changes).
  */
-export function NotebookEditor({ notebookId, groupId, doc, editable, onReady }: NotebookEditorProps) {
+export function NotebookEditor({ notebookId, groupId, doc, editable, onReady, presence }: NotebookEditorProps) {
   const figures = useMemo(() => createFigureIndex(), []);
   const [picking, setPicking] = useState(false);
   const onReadyRef = useRef(onReady);
@@ -35,7 +37,7 @@ export function NotebookEditor({ notebookId, groupId, doc, editable, onReady }: 
   const editor = useEditor(
     {
       // No `content`: the Y.Doc is the source of the document (see toolchain.md).
-      extensions: notebookEditorExtensions(doc, { onInsertNumber: () => openPicker.current() }),
+      extensions: notebookEditorExtensions(doc, { onInsertNumber: () => openPicker.current() }, presence),
       editable,
       editorProps: {
         attributes: { class: 'upwell-document-body', 'aria-label': 'Notebook text', role: 'textbox', 'aria-multiline': 'true' },

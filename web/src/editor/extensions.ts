@@ -1,5 +1,6 @@
 import { Extension, type AnyExtension } from '@tiptap/core';
 import Collaboration from '@tiptap/extension-collaboration';
+import CollaborationCaret from '@tiptap/extension-collaboration-caret';
 import { Fragment, Slice, type Node as PMNode } from '@tiptap/pm/model';
 import { Plugin, PluginKey } from '@tiptap/pm/state';
 import { ReactNodeViewRenderer } from '@tiptap/react';
@@ -73,8 +74,15 @@ export const UpwellShortcuts = Extension.create<UpwellShortcutOptions>({
   },
 });
 
-/** The editor's extensions: the shared document schema with our node views, Yjs binding and shortcuts. */
-export function notebookEditorExtensions(doc: Y.Doc, shortcuts: UpwellShortcutOptions): AnyExtension[] {
+/** Who is typing, for other people's carets; the provider carries presence (awareness) to them. */
+export interface PresenceOptions {
+  provider: { awareness: unknown };
+  user: { name: string; color: string };
+}
+
+/** The editor's extensions: the shared document schema with our node views, Yjs binding, carets of others and shortcuts. */
+export function notebookEditorExtensions(doc: Y.Doc, shortcuts: UpwellShortcutOptions, presence?: PresenceOptions): AnyExtension[] {
   const shared = upwellDocumentExtensions().map((ext) => (ext.name === 'liveFigure' ? LiveFigureWithView : ext.name === 'liveNumber' ? LiveNumberWithView : ext));
-  return [...shared, Collaboration.configure({ document: doc, field: DOCUMENT_FIELD }), UpwellShortcuts.configure(shortcuts)];
+  const carets = presence ? [CollaborationCaret.configure({ provider: presence.provider, user: presence.user })] : [];
+  return [...shared, Collaboration.configure({ document: doc, field: DOCUMENT_FIELD }), ...carets, UpwellShortcuts.configure(shortcuts)];
 }
