@@ -1,13 +1,16 @@
-import { fireEvent, render, screen } from '@testing-library/react';
+import { fireEvent, screen } from '@testing-library/react';
 import { describe, expect, it, vi } from 'vitest';
 import { RecipeForm } from './RecipeForm';
 import { INDEX_ID, SERIES_ID, seriesSummary } from './test-data';
+import { mockFetch, renderWithQuery } from './test-render';
 
 const library = [seriesSummary(), seriesSummary({ id: INDEX_ID, name: 'Warm-pool index', units: '°C', kind: 'climate-index', latest: { number: 5, start: '1950-01', end: '2020-12', createdAt: '' } })];
 
 function setup(initial: Record<string, unknown> | null = null) {
   const onSave = vi.fn();
-  const view = render(<RecipeForm initial={initial} series={library} onSave={onSave} />);
+  // The event-set and zonal-field choices ask the server; here the notebook has none of either.
+  mockFetch((path) => ({ json: path.includes('/fields') ? { gridded: [], zonal: [] } : [] }));
+  const view = renderWithQuery(<RecipeForm initial={initial} series={library} onSave={onSave} />);
   const form = screen.getByRole('form', { name: 'Figure settings' });
   const choose = (label: string | RegExp, value: string) => fireEvent.change(screen.getByLabelText(label), { target: { value } });
   return { onSave, form, choose, ...view };
@@ -45,7 +48,7 @@ describe('RecipeForm', () => {
     expect(screen.getByLabelText('Term 2 series')).toBeTruthy();
 
     choose('What the figure shows', 'hovmoller');
-    expect(screen.getByLabelText('Zonal-mean field id')).toBeTruthy();
+    expect(screen.getByLabelText('Zonal-mean field')).toBeTruthy();
     expect(screen.queryByLabelText('Series')).toBeNull();
 
     choose('What the figure shows', 'scatter');

@@ -1,5 +1,10 @@
 import { Button, Flex, Text } from '@radix-ui/themes';
 import { useId, useMemo, useState, type ReactNode } from 'react';
+import { useQuery } from '@tanstack/react-query';
+import { api } from '../api/client';
+import { useEventSets } from '../api/event-sets';
+import { useNotebookEditor } from '../editor/notebook-context';
+import type { FieldsList } from '@upwell/common';
 import { FIGURE_KIND_LABELS, FIGURE_LIMITS, figureRecipeSchema, type FigureKind, type ParsedFigureRecipe, type SeriesSummary } from '@upwell/common';
 import { BUDGET_COLOURS, budgetColour } from './budget-colours';
 import { FieldError } from './FieldError';
@@ -51,6 +56,41 @@ function NumberField({ f, path, label, step = 1, min, max, optional, hint }: { f
           {hint}
         </span>
       )}
+      <FieldError id={`${id}-e`} message={error} />
+    </div>
+  );
+}
+
+/** The notebook's saved event sets, as choices for the recipe form. */
+function useEventSetChoices(): { value: string; label: string }[] {
+  const { notebookId } = useNotebookEditor();
+  const sets = useEventSets(notebookId).list.data ?? [];
+  return sets.map((s) => ({ value: s.id, label: `${s.name} (${s.events.length} events)` }));
+}
+
+/** The group's stored zonal-mean fields, as choices for the time–latitude recipe. */
+function useZonalFieldChoices(): { value: string; label: string }[] {
+  const { groupId } = useNotebookEditor();
+  const fields = useQuery({ queryKey: ['fields', groupId], queryFn: () => api<FieldsList>(`/groups/${groupId}/fields`), enabled: !!groupId });
+  return (fields.data?.zonal ?? []).map((z) => ({ value: z.id, label: `${z.name} (${z.start}, ${z.months} months)` }));
+}
+
+/** A choice among named things (event sets, fields), saying what to do when there is none. */
+function NamedChoiceField({ f, path, label, options, empty }: { f: FormApi; path: Path; label: string; options: { value: string; label: string }[]; empty: string }) {
+  const id = useId();
+  const error = f.error(path);
+  return (
+    <div className="upwell-field">
+      <label htmlFor={id}>{label}</label>
+      <select id={id} value={String(getAt(f.draft, path) ?? '')} onChange={(e) => f.set(path, e.target.value)} aria-invalid={!!error || undefined} aria-describedby={error ? `${id}-e` : undefined}>
+        <option value="">{options.length ? 'Choose…' : '—'}</option>
+        {options.map((o) => (
+          <option key={o.value} value={o.value}>
+            {o.label}
+          </option>
+        ))}
+      </select>
+      {!options.length && <span className="upwell-field-hint">{empty}</span>}
       <FieldError id={`${id}-e`} message={error} />
     </div>
   );
@@ -188,7 +228,7 @@ function EventFields({ f }: { f: FormApi }) {
           <NumberField f={f} path={['events', 'roundTo']} label="Round index to (decimals)" min={0} max={6} optional />
         </Flex>
       ) : (
-        <TextField f={f} path={['events', 'eventSetId']} label="Event set id" hint="The id of one of this notebook’s saved event sets." />
+        <NamedChoiceField f={f} path={['events', 'eventSetId']} label="Event set" options={useEventSetChoices()} empty="No event set saved yet: detect and save one under “Event sets”." />
       )}
     </Group>
   );
@@ -321,7 +361,7 @@ function KindFields({ f }: { f: FormApi }) {
     case 'hovmoller':
       return (
         <>
-          <TextField f={f} path={['zonalFieldId']} label="Zonal-mean field id" hint="The id of a stored time–latitude field of this group." />
+          <NamedChoiceField f={f} path={['zonalFieldId']} label="Zonal-mean field" options={useZonalFieldChoices()} empty="No zonal-mean field yet: keep a gridded NetCDF variable from an upload and make a zonal mean of it." />
           <ChoiceField f={f} path={['show']} label="Show" options={[['anomaly', 'Anomaly'], ['raw', 'Values as stored']]} />
           <BasePeriod f={f} path={['base']} />
         </>
