@@ -32,6 +32,7 @@ export default defineConfig({
         },
       },
       {
+        resolve: { alias },
         test: {
           name: 'browser',
           include: ['e2e/**/*.browser.test.ts'],
