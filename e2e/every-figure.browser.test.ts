@@ -1,10 +1,9 @@
 import * as Y from 'yjs';
 import { prosemirrorJSONToYDoc } from '@tiptap/y-tiptap';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 import { DOCUMENT_FIELD, upwellSchema, type FigureRecipe } from '@upwell/common';
-import { launchBrowser, screenshot, watchErrors } from './support/browser';
-import { startBuiltServer, type RunningServer } from './support/server';
+import { screenshot, watchErrors } from './support/browser';
+import { useServerAndBrowser } from './support/harness';
 import { apiAs, indexAndFluxCsv, signInContext, signUp, uploadCsvSeries } from './support/api';
 
 /** A budget table whose terms close on the tendency up to a small residual (invented numbers). */
@@ -21,26 +20,16 @@ function budgetCsv(): string {
 }
 
 describe('every figure recipe in Chromium', () => {
-  let server: RunningServer;
-  let browser: Browser;
-  let closeBrowser: () => Promise<void>;
-  beforeAll(async () => {
-    server = await startBuiltServer();
-    ({ browser, close: closeBrowser } = await launchBrowser());
-  });
-  afterAll(async () => {
-    await closeBrowser?.();
-    await server?.stop();
-  });
+  const h = useServerAndBrowser();
 
   it('renders each of the eight recipes without a console error', async () => {
-    const { token } = await signUp(server.url, 'Lio Marsh', 'lio.marsh@example.org');
-    const group = await apiAs<{ id: string }>(server.url, token, '/groups', { name: 'Budget checkers' });
-    const [index, flux] = await uploadCsvSeries(server.url, token, group.id, 'a.csv', indexAndFluxCsv(4), [
+    const { token } = await signUp(h.server.url, 'Lio Marsh', 'lio.marsh@example.org');
+    const group = await apiAs<{ id: string }>(h.server.url, token, '/groups', { name: 'Budget checkers' });
+    const [index, flux] = await uploadCsvSeries(h.server.url, token, group.id, 'a.csv', indexAndFluxCsv(4), [
       { column: 'sector_index', name: 'Sector index', kind: 'climate-index', units: 'K' },
       { column: 'air_sea_flux', name: 'Air–sea flux', kind: 'flux', units: 'Pg C/yr' },
     ]);
-    const [tendency, advection, biology, airSea] = await uploadCsvSeries(server.url, token, group.id, 'b.csv', budgetCsv(), [
+    const [tendency, advection, biology, airSea] = await uploadCsvSeries(h.server.url, token, group.id, 'b.csv', budgetCsv(), [
       { column: 'tendency', name: 'DIC tendency', kind: 'budget-term', units: 'Pg C/yr' },
       { column: 'advection', name: 'Advection', kind: 'budget-term', units: 'Pg C/yr' },
       { column: 'biology', name: 'Biology', kind: 'budget-term', units: 'Pg C/yr' },
@@ -57,19 +46,19 @@ describe('every figure recipe in Chromium', () => {
       { kind: 'budget', tendency: b(tendency), terms: [{ name: 'advection', series: b(advection) }, { name: 'biology', series: b(biology) }, { name: 'air–sea flux', series: b(airSea) }] },
       { kind: 'scatter', index: b(index), series: b(flux), anomaly: base, lag: 4 },
     ];
-    const nb = await apiAs<{ id: string }>(server.url, token, `/groups/${group.id}/notebooks`, { title: 'All the figures' });
+    const nb = await apiAs<{ id: string }>(h.server.url, token, `/groups/${group.id}/notebooks`, { title: 'All the figures' });
     const json = {
       type: 'doc',
       content: recipes.map((recipe, i) => ({ type: 'liveFigure', attrs: { id: `00000000-0000-4000-8000-00000000000${i}`, recipe, caption: `Figure of ${recipe.kind}` } })),
     };
     const update = Y.encodeStateAsUpdate(prosemirrorJSONToYDoc(upwellSchema(), json, DOCUMENT_FIELD));
-    await apiAs(server.url, token, `/notebooks/${nb.id}/document/updates`, { update: Buffer.from(update).toString('base64') });
+    await apiAs(h.server.url, token, `/notebooks/${nb.id}/document/updates`, { update: Buffer.from(update).toString('base64') });
 
-    const context = await browser.newContext({ viewport: { width: 1300, height: 1000 } });
+    const context = await h.browser.newContext({ viewport: { width: 1300, height: 1000 } });
     await signInContext(context, token);
     const page = await context.newPage();
     const errors = watchErrors(page);
-    await page.goto(`${server.url}/notebooks/${nb.id}`);
+    await page.goto(`${h.server.url}/notebooks/${nb.id}`);
     await page.locator('.ProseMirror').waitFor();
     // Seven charts or tables, each with its methods note once computed.
     await expect.poll(async () => page.getByText('Methods.').count(), { timeout: 60_000 }).toBe(recipes.length);

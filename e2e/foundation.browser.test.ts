@@ -1,29 +1,17 @@
 import { existsSync, statSync } from 'node:fs';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser } from 'playwright-core';
-import { launchBrowser, screenshot, watchErrors } from './support/browser';
-import { startBuiltServer, type RunningServer } from './support/server';
+import { describe, expect, it } from 'vitest';
+import { screenshot, watchErrors } from './support/browser';
+import { useServerAndBrowser } from './support/harness';
 
 describe('a newcomer in Chromium', () => {
-  let server: RunningServer;
-  let browser: Browser;
-  let closeBrowser: () => Promise<void>;
-
-  beforeAll(async () => {
-    server = await startBuiltServer();
-    ({ browser, close: closeBrowser } = await launchBrowser());
-  });
-  afterAll(async () => {
-    await closeBrowser?.();
-    await server?.stop();
-  });
+  const h = useServerAndBrowser();
 
   it('signs up, creates a group, signs out and in again, and sees the empty notebooks page', async () => {
-    const context = await browser.newContext({ viewport: { width: 1280, height: 860 } });
+    const context = await h.browser.newContext({ viewport: { width: 1280, height: 860 } });
     const page = await context.newPage();
     const errors = watchErrors(page);
 
-    await page.goto(server.url);
+    await page.goto(h.server.url);
     await page.waitForURL('**/sign-in');
     await page.getByRole('link', { name: 'Create an account' }).click();
     await page.getByLabel('Name').fill('Rosa Quintero');
@@ -55,9 +43,9 @@ describe('a newcomer in Chromium', () => {
   });
 
   it('shows a clear message for a wrong password and stays on the sign-in page', async () => {
-    const context = await browser.newContext();
+    const context = await h.browser.newContext();
     const page = await context.newPage();
-    await page.goto(`${server.url}/sign-in`);
+    await page.goto(`${h.server.url}/sign-in`);
     await page.getByLabel('E-mail').fill('nobody@example.org');
     await page.getByLabel('Password').fill('wrong password');
     await page.getByRole('button', { name: 'Sign in' }).click();

@@ -1,38 +1,26 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser } from 'playwright-core';
-import { launchBrowser, screenshot, watchErrors } from './support/browser';
-import { startBuiltServer, type RunningServer } from './support/server';
+import { describe, expect, it } from 'vitest';
+import { screenshot, watchErrors } from './support/browser';
+import { useServerAndBrowser } from './support/harness';
 import { apiAs, indexAndFluxCsv, signInContext, signUp, uploadCsvSeries } from './support/api';
 
 describe('a notebook with live figures in Chromium', () => {
-  let server: RunningServer;
-  let browser: Browser;
-  let closeBrowser: () => Promise<void>;
-
-  beforeAll(async () => {
-    server = await startBuiltServer();
-    ({ browser, close: closeBrowser } = await launchBrowser());
-  });
-  afterAll(async () => {
-    await closeBrowser?.();
-    await server?.stop();
-  });
+  const h = useServerAndBrowser();
 
   it('writes text, inserts a lag-correlation figure and a live number, and the number follows a new series version', async () => {
-    const { token } = await signUp(server.url, 'Ana Ferreyra', 'ana.ferreyra@example.org');
-    const group = await apiAs<{ id: string }>(server.url, token, '/groups', { name: 'Equatorial carbon team' });
+    const { token } = await signUp(h.server.url, 'Ana Ferreyra', 'ana.ferreyra@example.org');
+    const group = await apiAs<{ id: string }>(h.server.url, token, '/groups', { name: 'Equatorial carbon team' });
     const columns = [
       { column: 'sector_index', name: 'Sector index', kind: 'climate-index', units: 'K' },
       { column: 'air_sea_flux', name: 'Air–sea flux', kind: 'flux', units: 'Pg C/yr' },
     ];
-    const [index, flux] = await uploadCsvSeries(server.url, token, group.id, 'run-a.csv', indexAndFluxCsv(3), columns);
+    const [index, flux] = await uploadCsvSeries(h.server.url, token, group.id, 'run-a.csv', indexAndFluxCsv(3), columns);
 
-    const context = await browser.newContext({ viewport: { width: 1300, height: 1000 } });
+    const context = await h.browser.newContext({ viewport: { width: 1300, height: 1000 } });
     await signInContext(context, token);
     const page = await context.newPage();
     const errors = watchErrors(page);
 
-    await page.goto(`${server.url}/notebooks`);
+    await page.goto(`${h.server.url}/notebooks`);
     await page.getByRole('button', { name: 'New notebook' }).click();
     await page.getByLabel('Title').fill('Outgassing during the warm events');
     await page.getByRole('button', { name: 'Create notebook' }).click();
@@ -72,7 +60,7 @@ describe('a notebook with live figures in Chromium', () => {
     await expect.poll(async () => (await number.textContent()) ?? '', { timeout: 20_000 }).toMatch(/^3\s?months?$/);
 
     // A new release of the flux, now answering 7 months later: the number changes without a reload.
-    await uploadCsvSeries(server.url, token, group.id, 'run-b.csv', indexAndFluxCsv(7), [columns[1]], { air_sea_flux: flux.id });
+    await uploadCsvSeries(h.server.url, token, group.id, 'run-b.csv', indexAndFluxCsv(7), [columns[1]], { air_sea_flux: flux.id });
     await expect.poll(async () => (await number.textContent()) ?? '', { timeout: 20_000 }).toMatch(/^7\s?months?$/);
     await page.getByText(/new version/i).first().waitFor();
     await screenshot(page, 'notebook-live-number-updated');

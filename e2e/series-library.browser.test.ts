@@ -1,10 +1,9 @@
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser } from 'playwright-core';
-import { launchBrowser, screenshot, watchErrors } from './support/browser';
-import { startBuiltServer, type RunningServer } from './support/server';
+import { describe, expect, it } from 'vitest';
+import { screenshot, watchErrors } from './support/browser';
+import { useServerAndBrowser } from './support/harness';
 import { apiAs, signInContext, signUp } from './support/api';
 
 /** A long-layout CSV of 3,000 months (about 90 kB), big enough for the progress bar to be seen under a throttled upload. */
@@ -22,23 +21,12 @@ function writeCsv(): string {
 }
 
 describe('the series library in Chromium', () => {
-  let server: RunningServer;
-  let browser: Browser;
-  let closeBrowser: () => Promise<void>;
-
-  beforeAll(async () => {
-    server = await startBuiltServer();
-    ({ browser, close: closeBrowser } = await launchBrowser());
-  });
-  afterAll(async () => {
-    await closeBrowser?.();
-    await server?.stop();
-  });
+  const h = useServerAndBrowser();
 
   it('uploads a CSV with a progress bar, maps its columns and shows the series in the table', async () => {
-    const { token } = await signUp(server.url, 'Teo Vance', 'teo.vance@example.org');
-    await apiAs(server.url, token, '/groups', { name: 'Equatorial sector team' });
-    const context = await browser.newContext({ viewport: { width: 1400, height: 900 } });
+    const { token } = await signUp(h.server.url, 'Teo Vance', 'teo.vance@example.org');
+    await apiAs(h.server.url, token, '/groups', { name: 'Equatorial sector team' });
+    const context = await h.browser.newContext({ viewport: { width: 1400, height: 900 } });
     await signInContext(context, token);
     const page = await context.newPage();
     const errors = watchErrors(page);
@@ -47,7 +35,7 @@ describe('the series library in Chromium', () => {
     await cdp.send('Network.enable');
     await cdp.send('Network.emulateNetworkConditions', { offline: false, latency: 0, downloadThroughput: -1, uploadThroughput: 40 * 1024 });
 
-    await page.goto(`${server.url}/series`);
+    await page.goto(`${h.server.url}/series`);
     await page.getByRole('heading', { name: 'No series stored yet' }).waitFor();
     await page.getByRole('button', { name: 'Upload series' }).first().click();
     await page.getByLabel('File to upload').setInputFiles(writeCsv());

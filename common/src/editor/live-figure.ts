@@ -1,4 +1,5 @@
 import { Node, mergeAttributes } from '@tiptap/core';
+import { jsonAttribute } from './json-attribute';
 
 /** Attributes of a live figure node: everything co-edits through the document. */
 export interface LiveFigureAttributes {
@@ -25,17 +26,7 @@ export const LiveFigure = Node.create({
   addAttributes() {
     return {
       id: { default: null, parseHTML: (el) => el.getAttribute('data-figure-id'), renderHTML: (a) => ({ 'data-figure-id': a.id }) },
-      recipe: {
-        default: null,
-        parseHTML: (el) => {
-          try {
-            return JSON.parse(el.getAttribute('data-recipe') ?? 'null');
-          } catch {
-            return null;
-          }
-        },
-        renderHTML: (a) => ({ 'data-recipe': JSON.stringify(a.recipe) }),
-      },
+      recipe: jsonAttribute('data-recipe', 'recipe'),
       caption: { default: '', parseHTML: (el) => el.getAttribute('data-caption') ?? '', renderHTML: (a) => ({ 'data-caption': a.caption }) },
     };
   },

@@ -1,4 +1,5 @@
 import { Node, mergeAttributes } from '@tiptap/core';
+import { jsonAttribute } from './json-attribute';
 
 /** Attributes of a live number: which figure's recipe, which of its numbers, how to print it. */
 export interface LiveNumberAttributes {
@@ -22,17 +23,7 @@ export const LiveNumber = Node.create({
 
   addAttributes() {
     return {
-      recipe: {
-        default: null,
-        parseHTML: (el) => {
-          try {
-            return JSON.parse(el.getAttribute('data-recipe') ?? 'null');
-          } catch {
-            return null;
-          }
-        },
-        renderHTML: (a) => ({ 'data-recipe': JSON.stringify(a.recipe) }),
-      },
+      recipe: jsonAttribute('data-recipe', 'recipe'),
       key: { default: '', parseHTML: (el) => el.getAttribute('data-key') ?? '', renderHTML: (a) => ({ 'data-key': a.key }) },
       precision: {
         default: 2,

@@ -1,4 +1,5 @@
-import { AlertDialog, Button, Flex, Text, TextField } from '@radix-ui/themes';
+import { Button, Flex, Text, TextField } from '@radix-ui/themes';
+import { ConfirmDelete } from '../../components/ConfirmDelete';
 import { useState, type FormEvent } from 'react';
 import { LIMITS } from '@upwell/common';
 import { useNavigate } from 'react-router';
@@ -46,31 +47,12 @@ export function NotebookSettings({ notebook }: { notebook: NotebookView }) {
         <Button variant="soft" onClick={() => duplicate.mutate()} loading={duplicate.isPending}>
           Duplicate notebook
         </Button>
-        <AlertDialog.Root>
-          <AlertDialog.Trigger>
-            <Button variant="soft" color="red">
-              Delete notebook
-            </Button>
-          </AlertDialog.Trigger>
-          <AlertDialog.Content maxWidth="440px">
-            <AlertDialog.Title>Delete “{notebook.title}”?</AlertDialog.Title>
-            <AlertDialog.Description size="2">
-              The document, its event sets and everyone’s roles on it are removed for good. Archive it instead to keep it out of the way.
-            </AlertDialog.Description>
-            <Flex gap="3" mt="4" justify="end">
-              <AlertDialog.Cancel>
-                <Button variant="soft" color="gray">
-                  Keep it
-                </Button>
-              </AlertDialog.Cancel>
-              <AlertDialog.Action>
-                <Button color="red" onClick={() => remove.mutate(undefined, { onSuccess: () => navigate('/notebooks') })}>
-                  Delete for good
-                </Button>
-              </AlertDialog.Action>
-            </Flex>
-          </AlertDialog.Content>
-        </AlertDialog.Root>
+        <ConfirmDelete
+          label="Delete notebook"
+          title={`Delete “${notebook.title}”?`}
+          description="The document, its event sets and everyone’s roles on it are removed for good. Archive it instead to keep it out of the way."
+          onConfirm={() => remove.mutate(undefined, { onSuccess: () => navigate('/notebooks') })}
+        />
       </Flex>
       <ErrorNote error={update.error ?? remove.error ?? duplicate.error} />
     </Flex>

@@ -1,4 +1,4 @@
-import { AlertDialog, Badge, Box, Button, Callout, Flex, Heading, Spinner, Table, Text } from '@radix-ui/themes';
+import { Badge, Box, Button, Callout, Flex, Heading, Spinner, Table, Text } from '@radix-ui/themes';
 import { useState } from 'react';
 import { useNavigate, useParams } from 'react-router';
 import { SERIES_KIND_LABELS } from '@upwell/common';
@@ -7,6 +7,7 @@ import { useDeleteSeries, useSeries, useSeriesValues } from '../../api/series';
 import { LazyVegaFigure } from '../../charts/LazyVegaFigure';
 import { seriesLineSpec } from '../../charts/series-spec';
 import { useCurrentGroup } from '../../current-group';
+import { ConfirmDelete } from '../../components/ConfirmDelete';
 import { ErrorNote } from '../../components/ErrorNote';
 import { formatWhen } from '../../components/dates';
 import { useSeriesLiveRefresh } from '../../realtime/socket';
@@ -127,29 +128,12 @@ export default function SeriesPage() {
         <MetadataForm key={s.updatedAt} series={s} />
       </section>
       {admin && (
-        <AlertDialog.Root>
-          <AlertDialog.Trigger>
-            <Button color="red" variant="soft" style={{ alignSelf: 'start' }}>
-              Delete series
-            </Button>
-          </AlertDialog.Trigger>
-          <AlertDialog.Content maxWidth="460px">
-            <AlertDialog.Title>Delete “{s.name}” and its {s.versions.length} versions?</AlertDialog.Title>
-            <AlertDialog.Description size="2">The values of every version are removed for good. Uploaded files stay in the data folder.</AlertDialog.Description>
-            <Flex gap="3" mt="4" justify="end">
-              <AlertDialog.Cancel>
-                <Button variant="soft" color="gray">
-                  Keep it
-                </Button>
-              </AlertDialog.Cancel>
-              <AlertDialog.Action>
-                <Button color="red" onClick={() => remove.mutate(undefined, { onSuccess: () => navigate('/series') })}>
-                  Delete for good
-                </Button>
-              </AlertDialog.Action>
-            </Flex>
-          </AlertDialog.Content>
-        </AlertDialog.Root>
+        <ConfirmDelete
+          label="Delete series"
+          title={`Delete “${s.name}” and its ${s.versions.length} versions?`}
+          description="The values of every version are removed for good. Uploaded files stay in the data folder."
+          onConfirm={() => remove.mutate(undefined, { onSuccess: () => navigate('/series') })}
+        />
       )}
       <ErrorNote error={remove.error} />
     </Flex>
