@@ -1,11 +1,12 @@
 import { Text } from '@radix-ui/themes';
-import type { SaveStatus as Status } from '../../sync/use-notebook-document';
+import type { LiveStatus as Status } from '../../sync/socket-document-provider';
 
 const WORDS: Record<Status, string> = {
-  loading: 'Opening the document…',
+  connecting: 'Connecting…',
+  closed: 'Closed',
   saved: 'All changes saved',
   saving: 'Saving…',
-  offline: 'Offline: your edits are kept on this device and sent when the connection returns',
+  offline: 'Offline: your edits are kept on this device and merged when the connection returns',
   refused: 'Not saved',
   'read-only': 'Read only',
 };

@@ -7,7 +7,9 @@ import { formatWhen } from '../../components/dates';
 import { NotebookEditor } from '../../editor';
 import { FigureRefreshNotice } from '../../figures/FigureRefreshNotice';
 import { useSeriesLiveRefresh } from '../../realtime/socket';
-import { useNotebookDocument } from '../../sync/use-notebook-document';
+import { useMe } from '../../api/auth';
+import { presenceColour, useLiveNotebookDocument } from '../../sync/use-live-document';
+import { PresenceRow } from './PresenceRow';
 import { AccessList } from './AccessList';
 import { EventSetsPanel } from './EventSetsPanel';
 import { NotebookSettings } from './NotebookSettings';
@@ -24,7 +26,8 @@ export default function NotebookPage() {
 
 function NotebookWorkspace({ notebook }: { notebook: NonNullable<ReturnType<typeof useNotebook>['data']> }) {
   const editable = notebook.allowed.includes('edit');
-  const { doc, status, error, ready } = useNotebookDocument(notebook.id, editable);
+  const me = useMe().data!;
+  const { doc, provider, status, error, ready } = useLiveNotebookDocument(notebook.id, { id: me.id, name: me.name });
   useSeriesLiveRefresh();
 
   return (
@@ -42,11 +45,25 @@ function NotebookWorkspace({ notebook }: { notebook: NonNullable<ReturnType<type
             Lead author {notebook.owner.name} · last edit {formatWhen(notebook.updatedAt)}
           </Text>
         </Flex>
-        <SaveStatusLine status={status} error={error} />
+        <Flex gap="4" align="center" wrap="wrap">
+          <PresenceRow provider={provider} meId={me.id} />
+          <SaveStatusLine status={status} error={error} />
+        </Flex>
       </Flex>
       <FigureRefreshNotice notebookId={notebook.id} />
       <Box className="upwell-sheet upwell-manuscript" px={{ initial: '4', sm: '8' }} py="6">
-        {ready ? <NotebookEditor notebookId={notebook.id} groupId={notebook.groupId} doc={doc} editable={editable} /> : <Spinner />}
+        {ready && provider ? (
+          <NotebookEditor
+            key={notebook.id}
+            notebookId={notebook.id}
+            groupId={notebook.groupId}
+            doc={doc}
+            editable={editable && provider.canEdit}
+            presence={{ provider, user: { name: me.name, color: presenceColour(me.id) } }}
+          />
+        ) : (
+          <Spinner />
+        )}
       </Box>
       <Tabs.Root defaultValue="events">
         <Tabs.List aria-label="About this notebook">
