@@ -129,3 +129,11 @@ export type SeriesValues = z.infer<typeof seriesValuesSchema>;
 /** A version reference as figures and computations give it: a number, or "latest". */
 export const versionRefSchema = z.union([z.literal('latest'), z.coerce.number().int().min(1)]);
 export type VersionRef = z.infer<typeof versionRefSchema>;
+
+/** Answer of GET /api/series/:seriesId/usage: notebooks whose figures or live numbers bind the series. */
+export const seriesUsageSchema = z.object({
+  notebooks: z.array(z.object({ id: z.string(), title: z.string() })),
+  /** Notebooks that use it but that the asker holds no role on (counted, not named). */
+  otherNotebooks: z.number(),
+});
+export type SeriesUsage = z.infer<typeof seriesUsageSchema>;

@@ -15,6 +15,7 @@ import { uuidParam } from '../common/ids';
 import { ZodValidationPipe } from '../common/zod-validation.pipe';
 import { User } from '../users/user.entity';
 import { SeriesService } from './series.service';
+import { SeriesUsageService } from './series-usage.service';
 
 const versionPipe = new ZodValidationPipe(versionRefSchema);
 
@@ -22,7 +23,10 @@ const versionPipe = new ZodValidationPipe(versionRefSchema);
 @ApiBearerAuth()
 @Controller()
 export class SeriesController {
-  constructor(private readonly series: SeriesService) {}
+  constructor(
+    private readonly series: SeriesService,
+    private readonly usage: SeriesUsageService,
+  ) {}
 
   @Get('groups/:groupId/series')
   @ApiOperation({ summary: 'The group’s series library: filtered, sorted, paged, with a sparkline each' })
@@ -50,6 +54,12 @@ export class SeriesController {
     @Body(new ZodValidationPipe(updateSeriesRequestSchema)) body: UpdateSeriesRequest,
   ) {
     return this.series.update(user, seriesId, body);
+  }
+
+  @Get('series/:seriesId/usage')
+  @ApiOperation({ summary: 'Notebooks whose figures or live numbers bind this series (asked before deleting it)' })
+  usageOf(@CurrentUser() user: User, @Param('seriesId', uuidParam('seriesId')) seriesId: string) {
+    return this.usage.usage(user, seriesId);
   }
 
   @Delete('series/:seriesId')

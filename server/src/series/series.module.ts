@@ -1,13 +1,15 @@
 import { Module } from '@nestjs/common';
+import { DocumentsModule } from '../documents/documents.module';
 import { GroupsModule } from '../groups/groups.module';
+import { SeriesUsageService } from './series-usage.service';
 import { SeriesController } from './series.controller';
 import { SeriesPolicy } from './series.policy';
 import { SeriesService } from './series.service';
 
 @Module({
-  imports: [GroupsModule],
+  imports: [GroupsModule, DocumentsModule],
   controllers: [SeriesController],
-  providers: [SeriesService, SeriesPolicy],
+  providers: [SeriesService, SeriesPolicy, SeriesUsageService],
   exports: [SeriesService, SeriesPolicy],
 })
 export class SeriesModule {}

@@ -1,5 +1,5 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { ListSeriesQuery, SeriesDetail, SeriesPage, SeriesValues, UpdateSeriesRequest } from '@upwell/common';
+import type { ListSeriesQuery, SeriesDetail, SeriesPage, SeriesUsage, SeriesValues, UpdateSeriesRequest } from '@upwell/common';
 import { api } from './client';
 
 export const seriesKeys = {
@@ -52,4 +52,9 @@ export function useDeleteSeries(id: string) {
     mutationFn: () => api<void>(`/series/${id}`, { method: 'DELETE' }),
     onSuccess: () => qc.invalidateQueries({ queryKey: seriesKeys.all }),
   });
+}
+
+/** Notebooks that bind the series (asked before deleting it). */
+export function useSeriesUsage(id: string, enabled: boolean) {
+  return useQuery({ queryKey: ['series', 'usage', id], queryFn: () => api<SeriesUsage>(`/series/${id}/usage`), enabled });
 }

@@ -3,7 +3,7 @@ import { useState } from 'react';
 import { useNavigate, useParams } from 'react-router';
 import { SERIES_KIND_LABELS } from '@upwell/common';
 import { downloadFile } from '../../api/download';
-import { useDeleteSeries, useSeries, useSeriesValues } from '../../api/series';
+import { useDeleteSeries, useSeries, useSeriesUsage, useSeriesValues } from '../../api/series';
 import { LazyVegaFigure } from '../../charts/LazyVegaFigure';
 import { seriesLineSpec } from '../../charts/series-spec';
 import { useCurrentGroup } from '../../current-group';
@@ -24,11 +24,15 @@ export default function SeriesPage() {
   const { group } = useCurrentGroup();
   const navigate = useNavigate();
   const [downloadError, setDownloadError] = useState<unknown>(null);
+  const usage = useSeriesUsage(seriesId, !!series.data && group?.role === 'admin');
 
   if (series.error) return <ErrorNote error={series.error} action="Go back to the series library." />;
   if (!series.data) return <Spinner size="3" />;
   const s = series.data;
   const admin = group?.id === s.groupId && group.role === 'admin';
+  const usedBy = usage.data
+    ? [...usage.data.notebooks.map((n) => `“${n.title}”`), ...(usage.data.otherNotebooks ? [`${usage.data.otherNotebooks} notebook(s) you have no role on`] : [])]
+    : [];
 
   return (
     <Flex direction="column" gap="5">
@@ -131,7 +135,7 @@ export default function SeriesPage() {
         <ConfirmDelete
           label="Delete series"
           title={`Delete “${s.name}” and its ${s.versions.length} versions?`}
-          description="The values of every version are removed for good. Uploaded files stay in the data folder."
+          description={`${usedBy.length ? `Figures and live numbers in ${usedBy.join(', ')} use this series and will show an error. ` : ''}The values of every version are removed for good. Uploaded files stay in the data folder.`}
           onConfirm={() => remove.mutate(undefined, { onSuccess: () => navigate('/series') })}
         />
       )}
