@@ -9,3 +9,4 @@ export * from './analysis';
 export * from './fields';
 export * from './figures';
 export * from './documents';
+export * from './checkpoints';

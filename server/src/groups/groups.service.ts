@@ -1,6 +1,7 @@
 import { EntityManager } from '@mikro-orm/sqlite';
 import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import type { AddMemberRequest, ChangeMemberRoleRequest, CreateGroupRequest, GroupDetail, GroupSummary } from '@upwell/common';
+import { DocumentAccess } from '../collaboration/document-access';
 import { Notebook, NotebookRoleAssignment } from '../notebooks/notebook.entity';
 import { RealtimeEvents } from '../realtime/realtime-events';
 import { User } from '../users/user.entity';
@@ -15,6 +16,7 @@ export class GroupsService {
     private readonly em: EntityManager,
     private readonly policy: GroupPolicy,
     private readonly events: RealtimeEvents,
+    private readonly documentAccess: DocumentAccess,
   ) {}
 
   async listMine(user: User): Promise<GroupSummary[]> {
@@ -86,6 +88,7 @@ export class GroupsService {
     });
     // Access removed while connected takes effect at once: their sockets leave the group's room.
     await this.events.setGroupMembership(userId, groupId, false);
+    await this.documentAccess.accessChanged({ userId });
   }
 
   private members(groupId: string): Promise<GroupMembership[]> {

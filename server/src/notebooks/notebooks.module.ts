@@ -1,4 +1,5 @@
 import { Module } from '@nestjs/common';
+import { CollaborationModule } from '../collaboration/collaboration.module';
 import { DocumentsModule } from '../documents/documents.module';
 import { GroupsModule } from '../groups/groups.module';
 import { NotebookAccessModule } from './notebook-access.module';
@@ -6,7 +7,7 @@ import { NotebooksController } from './notebooks.controller';
 import { NotebooksService } from './notebooks.service';
 
 @Module({
-  imports: [GroupsModule, NotebookAccessModule, DocumentsModule],
+  imports: [GroupsModule, NotebookAccessModule, DocumentsModule, CollaborationModule],
   controllers: [NotebooksController],
   providers: [NotebooksService],
   exports: [NotebookAccessModule],

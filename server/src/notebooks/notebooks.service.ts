@@ -9,6 +9,7 @@ import {
   type NotebookView,
   type UpdateNotebookRequest,
 } from '@upwell/common';
+import { DocumentAccess } from '../collaboration/document-access';
 import { DocumentsService } from '../documents/documents.service';
 import { GroupMembership } from '../groups/group.entity';
 import { GroupPolicy } from '../groups/group.policy';
@@ -25,6 +26,7 @@ export class NotebooksService {
     private readonly groups: GroupPolicy,
     private readonly policy: NotebookPolicy,
     private readonly documents: DocumentsService,
+    private readonly documentAccess: DocumentAccess,
   ) {}
 
   /** The group's notebooks the person holds a role on, newest edit first. */
@@ -94,6 +96,8 @@ export class NotebooksService {
       await em.nativeDelete(NotebookRoleAssignment, { notebook: notebook.id });
       await em.nativeDelete(Notebook, { id: notebook.id });
     });
+    // Anyone with the document open loses it at once.
+    await this.documentAccess.accessChanged({ notebookId });
   }
 
   async roles(user: User, notebookId: string): Promise<NotebookRoleView[]> {
@@ -125,6 +129,8 @@ export class NotebooksService {
       if (existing) existing.role = body.role;
       else em.create(NotebookRoleAssignment, { notebook, user: member.user, role: body.role });
     });
+    // A downgraded author's open document turns read-only at once (a hand-over changes two people's roles).
+    await this.documentAccess.accessChanged({ notebookId });
     return this.roles(user, notebookId);
   }
 
@@ -133,6 +139,8 @@ export class NotebooksService {
     if (userId === notebook.owner.id) throw new BadRequestException('the lead author cannot be removed; hand the notebook over first');
     const deleted = await this.em.nativeDelete(NotebookRoleAssignment, { notebook: notebookId, user: userId });
     if (!deleted) throw new NotFoundException('that person has no role on this notebook');
+    // Their open document closes at once, not at their next reconnect.
+    await this.documentAccess.accessChanged({ notebookId, userId });
   }
 }
 

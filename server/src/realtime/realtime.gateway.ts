@@ -7,11 +7,24 @@ import { AuthService } from '../auth/auth.service';
 import { GroupMembership } from '../groups/group.entity';
 import { groupRoom, RealtimeEvents, userRoom } from './realtime-events';
 
+/** Options of the app's one socket.io server; every gateway on it passes the same ones. */
+export const SOCKET_OPTIONS = { cors: { origin: false }, maxHttpBufferSize: 5e6 } as const;
+
+/**
+ * The signed-in person behind a socket, once the handshake token has been
+ * checked (null if it was refused). Handlers of other gateways await this
+ * rather than authenticating again, so there is one connection-auth path, and
+ * a message sent right after connecting waits for the check instead of racing it.
+ */
+export function authenticatedUserId(socket: Socket): Promise<string | null> {
+  return (socket.data.identity as Promise<string | null> | undefined) ?? Promise.resolve(null);
+}
+
 /**
  * The app's socket: authenticates each connection by the JWT in its handshake
  * (`auth: { token }`), then puts it in its person's room and their groups' rooms.
  */
-@WebSocketGateway({ cors: { origin: false }, maxHttpBufferSize: 5e6 })
+@WebSocketGateway(SOCKET_OPTIONS)
 export class RealtimeGateway implements OnGatewayInit, OnGatewayConnection {
   private readonly logger = new Logger('Socket');
 
@@ -26,6 +39,12 @@ export class RealtimeGateway implements OnGatewayInit, OnGatewayConnection {
   }
 
   async handleConnection(socket: Socket): Promise<void> {
+    // Set synchronously, before any message of this socket can be handled.
+    socket.data.identity = this.authenticate(socket);
+    await socket.data.identity;
+  }
+
+  private async authenticate(socket: Socket): Promise<string | null> {
     const token = typeof socket.handshake.auth?.token === 'string' ? socket.handshake.auth.token : null;
     // A socket handler has no HTTP request context: give it an EntityManager of its own.
     const em = this.em.fork();
@@ -33,11 +52,12 @@ export class RealtimeGateway implements OnGatewayInit, OnGatewayConnection {
     if (!user) {
       socket.emit(SOCKET_EVENTS.error, { message: SOCKET_CLOSE_REASONS.unauthenticated });
       socket.disconnect(true);
-      return;
+      return null;
     }
     socket.data.userId = user.id;
     const memberships = await em.find(GroupMembership, { user });
     await socket.join([userRoom(user.id), ...memberships.map((m) => groupRoom(m.group.id))]);
     this.logger.debug?.(`connected ${user.id}`);
+    return user.id;
   }
 }

@@ -1,0 +1,90 @@
+import { BadRequestException, Injectable, Logger } from '@nestjs/common';
+import { DOC_EVENTS, notebookRoleAllows, type DocRefused, type DocUpdateAck } from '@upwell/common';
+import type { Socket } from 'socket.io';
+import { AwarenessRelay } from './awareness-relay';
+import { asBytes, readDocFrame, syncStep2Frame, type DocFrame } from './doc-frames';
+import { DocumentBroadcast } from './document-broadcast';
+import type { DocumentRoom, RoomMember } from './document-room';
+import { DocumentWriter } from './document-writer';
+import { RoomMembership } from './room-membership';
+
+/** Why a message was refused, said to the person. */
+class Refusal extends Error {}
+
+/**
+ * `doc:message` from a client: sync step 1 is answered, document updates are
+ * stored and passed on if the person may edit, presence is relayed. Anything
+ * refused is answered with `doc:refused` and an ack saying why; nothing of it
+ * is applied, stored or passed on.
+ */
+@Injectable()
+export class DocumentMessages {
+  private readonly logger = new Logger('DocumentMessages');
+
+  constructor(
+    private readonly membership: RoomMembership,
+    private readonly writer: DocumentWriter,
+    private readonly awareness: AwarenessRelay,
+    private readonly broadcast: DocumentBroadcast,
+  ) {}
+
+  /** Handles one message; never throws, the ack carries the outcome. */
+  async handle(socket: Socket, body: unknown): Promise<DocUpdateAck> {
+    const notebookId = typeof (body as { notebookId?: unknown } | null)?.notebookId === 'string' ? (body as { notebookId: string }).notebookId : '';
+    try {
+      const data = asBytes((body as { data?: unknown } | null)?.data);
+      if (!notebookId || !data) throw new Refusal('doc:message needs { notebookId: string, data: binary }');
+      const joined = this.membership.memberOf(socket, notebookId);
+      if (!joined) throw new Refusal('join this notebook (doc:join) before sending to it');
+      let frame: DocFrame;
+      try {
+        frame = readDocFrame(data);
+      } catch (err) {
+        throw new Refusal(`the message could not be read: ${err instanceof Error ? err.message : 'bad framing'}`);
+      }
+      return await this.dispatch(joined.room, joined.member, data, frame);
+    } catch (err) {
+      const reason = err instanceof Refusal ? err.message : this.unexpected(err, notebookId);
+      socket.emit(DOC_EVENTS.refused, { notebookId, reason } satisfies DocRefused);
+      return { stored: false, error: reason };
+    }
+  }
+
+  private async dispatch(room: DocumentRoom, member: RoomMember, data: Uint8Array, frame: DocFrame): Promise<DocUpdateAck> {
+    if (frame.kind === 'sync-step-1') {
+      let answer: Uint8Array;
+      try {
+        answer = syncStep2Frame(room.doc, frame.stateVector);
+      } catch {
+        throw new Refusal('the sync step 1 carried no readable state vector');
+      }
+      this.broadcast.toSocket(member.socket, room.notebookId, answer);
+      return { stored: false };
+    }
+    if (frame.kind === 'awareness') {
+      try {
+        this.awareness.relay(room, member, data, frame.update);
+      } catch {
+        throw new Refusal('the presence update could not be read');
+      }
+      return { stored: false };
+    }
+    // Already stored (typically a client's sync step 2 right after joining): nothing to refuse or write.
+    if (!this.writer.carriesNews(room, frame.update)) return { stored: true };
+    if (!notebookRoleAllows(member.role, 'edit')) {
+      throw new Refusal(`as ${member.role.replace('-', ' ')} you may read this notebook but not edit it; the change was not applied`);
+    }
+    try {
+      await this.writer.write(room, frame.update, member.userId, member.socket);
+    } catch (err) {
+      if (err instanceof BadRequestException) throw new Refusal(err.message);
+      throw err;
+    }
+    return { stored: true };
+  }
+
+  private unexpected(err: unknown, notebookId: string): string {
+    this.logger.error(`a document message for ${notebookId || 'an unknown notebook'} failed: ${err instanceof Error ? err.stack : err}`);
+    return 'the server could not store this change; it was not applied, try again';
+  }
+}
