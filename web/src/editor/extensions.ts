@@ -77,7 +77,7 @@ export const UpwellShortcuts = Extension.create<UpwellShortcutOptions>({
 /** Who is typing, for other people's carets; the provider carries presence (awareness) to them. */
 export interface PresenceOptions {
   provider: { awareness: unknown };
-  user: { name: string; color: string };
+  user: { id: string; name: string; color: string };
 }
 
 /** The editor's extensions: the shared document schema with our node views, Yjs binding, carets of others and shortcuts. */

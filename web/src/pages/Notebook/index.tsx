@@ -59,7 +59,7 @@ function NotebookWorkspace({ notebook }: { notebook: NonNullable<ReturnType<type
             groupId={notebook.groupId}
             doc={doc}
             editable={editable && provider.canEdit}
-            presence={{ provider, user: { name: me.name, color: presenceColour(me.id) } }}
+            presence={{ provider, user: { id: me.id, name: me.name, color: presenceColour(me.id) } }}
           />
         ) : (
           <Spinner />

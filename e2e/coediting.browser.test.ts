@@ -1,0 +1,38 @@
+import { describe, expect, it } from 'vitest';
+import { screenshot, watchErrors } from './support/browser';
+import { useServerAndBrowser } from './support/harness';
+import { apiAs, signInContext, signUp } from './support/api';
+
+describe('two co-authors in one notebook, in Chromium', () => {
+  const h = useServerAndBrowser();
+
+  it('one types; the other sees the text and the caret with the first person’s name', async () => {
+    const lead = await signUp(h.server.url, 'Ines Marlow', 'ines.marlow@example.org');
+    const co = await signUp(h.server.url, 'Kofi Adjei', 'kofi.adjei@example.org');
+    const group = await apiAs<{ id: string }>(h.server.url, lead.token, '/groups', { name: 'Warm pool group' });
+    await apiAs(h.server.url, lead.token, `/groups/${group.id}/members`, { email: 'kofi.adjei@example.org' });
+    const nb = await apiAs<{ id: string }>(h.server.url, lead.token, `/groups/${group.id}/notebooks`, { title: 'Shared draft' });
+    await apiAs(h.server.url, lead.token, `/notebooks/${nb.id}/roles/${co.userId}`, { role: 'co-author' }, 'PUT');
+
+    const [ctxA, ctxB] = [await h.browser.newContext(), await h.browser.newContext()];
+    await signInContext(ctxA, lead.token);
+    await signInContext(ctxB, co.token);
+    const [a, b] = [await ctxA.newPage(), await ctxB.newPage()];
+    const errors = [...watchErrors(a), ...watchErrors(b)];
+    await a.goto(`${h.server.url}/notebooks/${nb.id}`);
+    await b.goto(`${h.server.url}/notebooks/${nb.id}`);
+    await a.locator('.ProseMirror').waitFor();
+    await b.locator('.ProseMirror').waitFor();
+    await b.getByRole('group', { name: 'Here now' }).getByText('Ines Marlow').waitFor({ timeout: 15_000 });
+
+    await a.locator('.ProseMirror p').last().click();
+    await a.keyboard.type('The recharge phase precedes each warm event.');
+    await b.locator('.ProseMirror p', { hasText: 'The recharge phase precedes each warm event.' }).waitFor({ timeout: 15_000 });
+    await b.locator('.collaboration-carets__label', { hasText: 'Ines Marlow' }).waitFor({ timeout: 15_000 });
+    await a.getByText('All changes saved').waitFor({ timeout: 15_000 });
+    await screenshot(b, 'coediting-second-person');
+    expect(errors).toEqual([]);
+    await ctxA.close();
+    await ctxB.close();
+  });
+});
