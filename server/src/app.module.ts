@@ -18,6 +18,8 @@ import { UploadsModule } from './uploads/uploads.module';
 import { FieldsModule } from './fields/fields.module';
 import { FiguresModule } from './figures/figures.module';
 import { EventSetsModule } from './event-sets/event-sets.module';
+import { CommentsModule } from './comments/comments.module';
+import { NotificationsModule } from './notifications/notifications.module';
 
 /** The whole server, built for one resolved configuration. */
 @Module({})
@@ -46,6 +48,8 @@ export class AppModule {
         FieldsModule,
         FiguresModule,
         EventSetsModule,
+        CommentsModule,
+        NotificationsModule,
       ],
       controllers: [HealthController],
       providers: [MigrateOnStart],

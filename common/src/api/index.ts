@@ -9,3 +9,5 @@ export * from './analysis';
 export * from './fields';
 export * from './figures';
 export * from './documents';
+export * from './comments';
+export * from './notifications';

@@ -2,6 +2,7 @@ import type { MigrationObject } from '@mikro-orm/core';
 import { Migration20261201185536 } from './Migration20261201185536';
 import { Migration20261201190750 } from './Migration20261201190750';
 import { Migration20261201193518 } from './Migration20261201193518';
+import { Migration20261201200734 } from './Migration20261201200734';
 
 /**
  * Every migration, oldest first. Create one with `npm run migration:create -w server`
@@ -14,4 +15,6 @@ export const migrationsList: MigrationObject[] = [
   { name: 'Migration20261201190750', class: Migration20261201190750 },
   // Notebook documents (Yjs state and update log) and saved event sets.
   { name: 'Migration20261201193518', class: Migration20261201193518 },
+  // Review threads with replies on notebooks, and in-app notifications of mentions.
+  { name: 'Migration20261201200734', class: Migration20261201200734 },
 ];
