@@ -20,6 +20,8 @@ import { FiguresModule } from './figures/figures.module';
 import { EventSetsModule } from './event-sets/event-sets.module';
 import { CollaborationModule } from './collaboration/collaboration.module';
 import { CheckpointsModule } from './checkpoints/checkpoints.module';
+import { CommentsModule } from './comments/comments.module';
+import { NotificationsModule } from './notifications/notifications.module';
 
 /** The whole server, built for one resolved configuration. */
 @Module({})
@@ -50,6 +52,8 @@ export class AppModule {
         EventSetsModule,
         CollaborationModule,
         CheckpointsModule,
+        CommentsModule,
+        NotificationsModule,
       ],
       controllers: [HealthController],
       providers: [MigrateOnStart],

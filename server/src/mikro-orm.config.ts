@@ -10,10 +10,12 @@ import { GriddedField, ZonalMeanField } from './fields/field.entity';
 import { NotebookDocument, NotebookUpdate } from './documents/notebook-document.entity';
 import { EventSet } from './event-sets/event-set.entity';
 import { Checkpoint } from './checkpoints/checkpoint.entity';
+import { CommentReply, CommentThread } from './comments/comment.entity';
+import { Notification } from './notifications/notification.entity';
 import { migrationsList } from './migrations';
 
 /** Every entity the server stores; new modules add theirs here. */
-export const ENTITIES = [User, Group, GroupMembership, Notebook, NotebookRoleAssignment, UploadedFile, Series, SeriesVersion, GriddedField, ZonalMeanField, NotebookDocument, NotebookUpdate, EventSet, Checkpoint];
+export const ENTITIES = [User, Group, GroupMembership, Notebook, NotebookRoleAssignment, UploadedFile, Series, SeriesVersion, GriddedField, ZonalMeanField, NotebookDocument, NotebookUpdate, EventSet, Checkpoint, CommentThread, CommentReply, Notification];
 
 /** MikroORM options for the SQLite file at `databaseFile`. */
 export function buildOrmOptions(databaseFile: string): Options {

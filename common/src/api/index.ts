@@ -10,3 +10,5 @@ export * from './fields';
 export * from './figures';
 export * from './documents';
 export * from './checkpoints';
+export * from './comments';
+export * from './notifications';

@@ -9,6 +9,20 @@ export const SOCKET_EVENTS = {
   seriesDeleted: 'series:deleted',
   /** Server → uploader: how far the processing of an upload has come. */
   uploadProgress: 'upload:progress',
+  /** Server → everyone who can read the notebook: a comment thread was opened. */
+  commentThreadCreated: 'comments:thread-created',
+  /** Server → everyone who can read the notebook: a reply was added to a thread. */
+  commentReplyAdded: 'comments:reply-added',
+  /** Server → everyone who can read the notebook: a thread was resolved. */
+  commentThreadResolved: 'comments:thread-resolved',
+  /** Server → everyone who can read the notebook: a resolved thread was reopened. */
+  commentThreadReopened: 'comments:thread-reopened',
+  /** Server → everyone who can read the notebook: a thread and its replies were deleted. */
+  commentThreadDeleted: 'comments:thread-deleted',
+  /** Server → everyone who can read the notebook: one reply was deleted. */
+  commentReplyDeleted: 'comments:reply-deleted',
+  /** Server → recipient: a new notification (someone mentioned you). */
+  notificationCreated: 'notifications:created',
   /** Server → client: the connection was refused or a message was not accepted. */
   error: 'upwell:error',
 } as const;
@@ -29,6 +43,25 @@ export interface UploadProgressEvent {
   /** 0..1, or null when the amount of work is not known. */
   fraction: number | null;
   message?: string;
+}
+
+/**
+ * Payload of every `comments:*` event. It names what changed, not the text:
+ * clients fetch the threads again, which the server answers by the reader's role.
+ */
+export interface CommentChangedEvent {
+  notebookId: string;
+  threadId: string;
+  /** The reply added or deleted, for reply events. */
+  replyId: string | null;
+  /** Who made the change (user id). */
+  by: string;
+}
+
+/** Payload of `notifications:created`: the recipient's new unread count and the notification's id. */
+export interface NotificationCreatedEvent {
+  notificationId: string;
+  unread: number;
 }
 
 /** Why the server refused or closed a socket. */

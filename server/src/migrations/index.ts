@@ -2,6 +2,7 @@ import type { MigrationObject } from '@mikro-orm/core';
 import { Migration20261201185536 } from './Migration20261201185536';
 import { Migration20261201190750 } from './Migration20261201190750';
 import { Migration20261201193518 } from './Migration20261201193518';
+import { Migration20261201200734 } from './Migration20261201200734';
 import { Migration20261201201010 } from './Migration20261201201010';
 
 /**
@@ -15,6 +16,8 @@ export const migrationsList: MigrationObject[] = [
   { name: 'Migration20261201190750', class: Migration20261201190750 },
   // Notebook documents (Yjs state and update log) and saved event sets.
   { name: 'Migration20261201193518', class: Migration20261201193518 },
+  // Review threads with replies on notebooks, and in-app notifications of mentions.
+  { name: 'Migration20261201200734', class: Migration20261201200734 },
   // Named checkpoints of notebook documents (version history).
   { name: 'Migration20261201201010', class: Migration20261201201010 },
 ];

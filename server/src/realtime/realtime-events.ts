@@ -32,6 +32,15 @@ export class RealtimeEvents {
     this.server?.to(userRoom(userId)).emit(SOCKET_EVENTS.uploadProgress, event);
   }
 
+  /**
+   * Sends to each named person's own room. Notebook events (comments) go this
+   * way, to the people with a role on the notebook, never to a whole group.
+   */
+  toPeople(userIds: readonly string[], event: string, payload: unknown): void {
+    if (!userIds.length) return;
+    this.server?.to(userIds.map(userRoom)).emit(event, payload);
+  }
+
   /** Makes every connection of a person join or leave a group's room at once (membership changed). */
   async setGroupMembership(userId: string, groupId: string, member: boolean): Promise<void> {
     if (!this.server) return;

@@ -1,0 +1,7 @@
+import { Module } from '@nestjs/common';
+import { NotificationsController } from './notifications.controller';
+import { NotificationsService } from './notifications.service';
+
+/** In-app notifications (mentions in comments) and the routes to read them. */
+@Module({ controllers: [NotificationsController], providers: [NotificationsService], exports: [NotificationsService] })
+export class NotificationsModule {}

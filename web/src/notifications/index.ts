@@ -1,0 +1,2 @@
+export { NotificationsMenu } from './NotificationsMenu';
+export { useNotifications, useMarkNotificationsRead, notificationKeys } from './api';
