@@ -31,6 +31,15 @@ describe('two co-authors in one notebook, in Chromium', () => {
     await b.locator('.collaboration-carets__label', { hasText: 'Ines Marlow' }).waitFor({ timeout: 15_000 });
     await a.getByText('All changes saved').waitFor({ timeout: 15_000 });
     await screenshot(b, 'coediting-second-person');
+
+    // The second person selects a passage and comments; the first sees the note appear with its quote.
+    await b.locator('.ProseMirror p', { hasText: 'recharge phase' }).dblclick();
+    await b.getByRole('textbox', { name: 'Comment' }).fill('Which index defines the recharge phase here?');
+    await b.getByRole('button', { name: 'Add comment' }).click();
+    const note = a.getByRole('complementary', { name: 'Review notes' }).getByText('Which index defines the recharge phase here?');
+    await note.waitFor({ timeout: 15_000 });
+    expect(await a.getByRole('complementary', { name: 'Review notes' }).getByText('Kofi Adjei').count()).toBeGreaterThan(0);
+    await screenshot(a, 'coediting-comment-seen');
     expect(errors).toEqual([]);
     await ctxA.close();
     await ctxB.close();

@@ -4,6 +4,7 @@ import { useMe } from '../api/auth';
 import { getToken } from '../api/client';
 import { CurrentGroupProvider, useCurrentGroup } from '../current-group';
 import { ErrorNote } from './ErrorNote';
+import { NotificationsMenu } from '../notifications';
 
 function GroupSwitcher() {
   const { group, groups, choose } = useCurrentGroup();
@@ -54,12 +55,13 @@ export function AppShell() {
             </Flex>
           </nav>
           <Box flexGrow="1" />
+          <NotificationsMenu />
           <Text size="2" color="gray">
             {me.data.name}
           </Text>
         </Flex>
       </Box>
-      <Container size="3" px="5" py="6">
+      <Container size="4" px="5" py="6">
         <main>
           <Outlet />
         </main>

@@ -1,4 +1,7 @@
-import { Badge, Box, Flex, Heading, Spinner, Tabs, Text } from '@radix-ui/themes';
+import { Badge, Box, Flex, Grid, Heading, Spinner, Tabs, Text } from '@radix-ui/themes';
+import type { Editor } from '@tiptap/react';
+import { useState } from 'react';
+import { CommentsPanel, anchorToRange, useCommentAnchorFromSelection } from '../../comments';
 import { useParams } from 'react-router';
 import { NOTEBOOK_ROLE_LABELS } from '@upwell/common';
 import { useNotebook } from '../../api/notebooks';
@@ -28,6 +31,8 @@ function NotebookWorkspace({ notebook }: { notebook: NonNullable<ReturnType<type
   const editable = notebook.allowed.includes('edit');
   const me = useMe().data!;
   const { doc, provider, status, error, ready } = useLiveNotebookDocument(notebook.id, { id: me.id, name: me.name });
+  const [editor, setEditor] = useState<Editor | null>(null);
+  const anchor = useCommentAnchorFromSelection(editor);
   useSeriesLiveRefresh();
 
   return (
@@ -51,20 +56,37 @@ function NotebookWorkspace({ notebook }: { notebook: NonNullable<ReturnType<type
         </Flex>
       </Flex>
       <FigureRefreshNotice notebookId={notebook.id} />
-      <Box className="upwell-sheet upwell-manuscript" px={{ initial: '4', sm: '8' }} py="6">
-        {ready && provider ? (
-          <NotebookEditor
-            key={notebook.id}
-            notebookId={notebook.id}
-            groupId={notebook.groupId}
-            doc={doc}
-            editable={editable && provider.canEdit}
-            presence={{ provider, user: { id: me.id, name: me.name, color: presenceColour(me.id) } }}
-          />
-        ) : (
-          <Spinner />
-        )}
-      </Box>
+      <Grid columns={{ initial: '1', md: '1fr 320px' }} gap="4" align="start">
+        <Box className="upwell-sheet upwell-manuscript" px={{ initial: '4', sm: '8' }} py="6">
+          {ready && provider ? (
+            <NotebookEditor
+              key={notebook.id}
+              notebookId={notebook.id}
+              groupId={notebook.groupId}
+              doc={doc}
+              editable={editable && provider.canEdit}
+              presence={{ provider, user: { id: me.id, name: me.name, color: presenceColour(me.id) } }}
+              onReady={setEditor}
+            />
+          ) : (
+            <Spinner />
+          )}
+        </Box>
+        <Box asChild style={{ position: 'sticky', top: 16 }}>
+          <aside aria-label="Review notes">
+            <CommentsPanel
+              notebookId={notebook.id}
+              groupId={notebook.groupId}
+              canComment={notebook.allowed.includes('comment')}
+              anchor={anchor}
+              onSelectAnchor={(a) => {
+                const range = editor && anchorToRange(editor, a);
+                if (editor && range) editor.chain().setTextSelection(range).scrollIntoView().run();
+              }}
+            />
+          </aside>
+        </Box>
+      </Grid>
       <Tabs.Root defaultValue="events">
         <Tabs.List aria-label="About this notebook">
           <Tabs.Trigger value="events">Event sets</Tabs.Trigger>
