@@ -28,9 +28,19 @@ export class DocumentMessages {
     private readonly broadcast: DocumentBroadcast,
   ) {}
 
-  /** Handles one message; never throws, the ack carries the outcome. */
-  async handle(socket: Socket, body: unknown): Promise<DocUpdateAck> {
+  /**
+   * Handles one message in the socket's turn; resolves once the message is
+   * checked and, for an update, queued to be stored, so the socket's next
+   * message can be checked while this one is written. `outcome` settles with
+   * the ack once it is stored (or refused); it never rejects.
+   */
+  async handle(socket: Socket, body: unknown): Promise<{ outcome: Promise<DocUpdateAck> }> {
     const notebookId = typeof (body as { notebookId?: unknown } | null)?.notebookId === 'string' ? (body as { notebookId: string }).notebookId : '';
+    const refuse = (err: unknown): DocUpdateAck => {
+      const reason = err instanceof Refusal ? err.message : this.unexpected(err, notebookId);
+      socket.emit(DOC_EVENTS.refused, { notebookId, reason } satisfies DocRefused);
+      return { stored: false, error: reason };
+    };
     try {
       const data = asBytes((body as { data?: unknown } | null)?.data);
       if (!notebookId || !data) throw new Refusal('doc:message needs { notebookId: string, data: binary }');
@@ -42,15 +52,15 @@ export class DocumentMessages {
       } catch (err) {
         throw new Refusal(`the message could not be read: ${err instanceof Error ? err.message : 'bad framing'}`);
       }
-      return await this.dispatch(joined.room, joined.member, data, frame);
+      const result = this.dispatch(joined.room, joined.member, data, frame);
+      return { outcome: result.then((ack) => ack, refuse) };
     } catch (err) {
-      const reason = err instanceof Refusal ? err.message : this.unexpected(err, notebookId);
-      socket.emit(DOC_EVENTS.refused, { notebookId, reason } satisfies DocRefused);
-      return { stored: false, error: reason };
+      return { outcome: Promise.resolve(refuse(err)) };
     }
   }
 
-  private async dispatch(room: DocumentRoom, member: RoomMember, data: Uint8Array, frame: DocFrame): Promise<DocUpdateAck> {
+  /** Synchronous checks throw; the returned promise settles when the message is fully handled. */
+  private dispatch(room: DocumentRoom, member: RoomMember, data: Uint8Array, frame: DocFrame): Promise<DocUpdateAck> {
     if (frame.kind === 'sync-step-1') {
       let answer: Uint8Array;
       try {
@@ -59,7 +69,7 @@ export class DocumentMessages {
         throw new Refusal('the sync step 1 carried no readable state vector');
       }
       this.broadcast.toSocket(member.socket, room.notebookId, answer);
-      return { stored: false };
+      return Promise.resolve({ stored: false });
     }
     if (frame.kind === 'awareness') {
       try {
@@ -67,20 +77,19 @@ export class DocumentMessages {
       } catch {
         throw new Refusal('the presence update could not be read');
       }
-      return { stored: false };
+      return Promise.resolve({ stored: false });
     }
     // Already stored (typically a client's sync step 2 right after joining): nothing to refuse or write.
-    if (!this.writer.carriesNews(room, frame.update)) return { stored: true };
+    if (!this.writer.carriesNews(room, frame.update)) return Promise.resolve({ stored: true });
     if (!notebookRoleAllows(member.role, 'edit')) {
       throw new Refusal(`as ${member.role.replace('-', ' ')} you may read this notebook but not edit it; the change was not applied`);
     }
-    try {
-      await this.writer.write(room, frame.update, member.userId, member.socket);
-    } catch (err) {
-      if (err instanceof BadRequestException) throw new Refusal(err.message);
-      throw err;
-    }
-    return { stored: true };
+    return this.writer.write(room, frame.update, member.userId, member.socket).then(
+      (): DocUpdateAck => ({ stored: true }),
+      (err) => {
+        throw err instanceof BadRequestException ? new Refusal(err.message) : err;
+      },
+    );
   }
 
   private unexpected(err: unknown, notebookId: string): string {

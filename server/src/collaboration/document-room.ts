@@ -16,6 +16,14 @@ export interface RoomMember {
   awarenessClients: Set<number>;
 }
 
+/** An accepted update waiting for its turn to be stored (see DocumentWriter). */
+export interface PendingWrite {
+  update: Uint8Array;
+  authorId: string | null;
+  sender?: Socket;
+  done: (err?: unknown) => void;
+}
+
 /**
  * A notebook's document held in memory while anyone follows it. The doc
  * holds only stored content: updates are applied here after they are on disk.
@@ -26,6 +34,9 @@ export class DocumentRoom {
   /** Server-side work (a checkpoint, a restore) that needs the room kept loaded. */
   holds = 0;
   unloadTimer: NodeJS.Timeout | null = null;
+  /** Updates waiting while an earlier batch is being stored. */
+  readonly pendingWrites: PendingWrite[] = [];
+  writing = false;
 
   constructor(
     readonly notebookId: string,
@@ -44,7 +55,7 @@ export class DocumentRoom {
 
   /** Whether nobody and nothing needs the room any more. */
   get idle(): boolean {
-    return this.members.size === 0 && this.holds === 0;
+    return this.members.size === 0 && this.holds === 0 && !this.writing && this.pendingWrites.length === 0;
   }
 
   destroy(): void {

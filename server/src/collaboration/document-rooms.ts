@@ -63,11 +63,13 @@ export class DocumentRooms implements OnModuleDestroy {
   }
 
   /** Schedules the room's unload if nobody follows it any more. */
-  releaseIfIdle(room: DocumentRoom): void {
-    if (!room.idle || room.unloadTimer) return;
+  releaseIfIdle(room: DocumentRoom, retry = false): void {
+    if ((!room.idle && !retry) || room.unloadTimer) return;
     room.unloadTimer = setTimeout(() => {
       room.unloadTimer = null;
-      if (!room.idle || this.rooms.get(room.notebookId) !== room) return;
+      if (this.rooms.get(room.notebookId) !== room) return;
+      // Still storing what its last sockets sent: look again later.
+      if (!room.idle) return room.members.size === 0 ? this.releaseIfIdle(room, true) : undefined;
       this.rooms.delete(room.notebookId);
       room.destroy();
     }, this.unloadAfterMs);

@@ -56,7 +56,9 @@ export class DocumentGateway implements OnGatewayInit, OnGatewayDisconnect {
 
   @SubscribeMessage(DOC_EVENTS.message)
   async message(@ConnectedSocket() socket: Socket, @MessageBody() body: unknown, @Ack() ack: AckFn<DocUpdateAck>): Promise<void> {
-    const answer = await enqueue(socket, () => this.messages.handle(socket, body));
+    // The socket's turn ends once the message is checked and queued; the ack waits until it is stored.
+    const { outcome } = await enqueue(socket, () => this.messages.handle(socket, body));
+    const answer = await outcome;
     if (typeof ack === 'function') ack(answer);
   }
 
