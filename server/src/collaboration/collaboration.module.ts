@@ -10,6 +10,7 @@ import { DocumentRooms } from './document-rooms';
 import { DocumentSessions } from './document-sessions';
 import { DocumentWriter } from './document-writer';
 import { RoomMembership } from './room-membership';
+import { HttpEditsThroughRooms } from './http-edits-through-rooms';
 
 /**
  * Real-time co-editing of notebook documents: rooms of live Yjs documents,
@@ -19,7 +20,7 @@ import { RoomMembership } from './room-membership';
  */
 @Module({
   imports: [DocumentsModule, NotebookAccessModule],
-  providers: [DocumentGateway, DocumentSessions, DocumentMessages, DocumentRooms, DocumentWriter, DocumentBroadcast, AwarenessRelay, RoomMembership, DocumentAccess],
+  providers: [DocumentGateway, DocumentSessions, DocumentMessages, DocumentRooms, DocumentWriter, DocumentBroadcast, AwarenessRelay, RoomMembership, DocumentAccess, HttpEditsThroughRooms],
   exports: [DocumentAccess, DocumentRooms, DocumentWriter],
 })
 export class CollaborationModule {}

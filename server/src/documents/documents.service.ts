@@ -21,6 +21,7 @@ const COMPACT_AFTER = 50;
 @Injectable()
 export class DocumentsService {
   private readonly logger = new Logger('Documents');
+  private liveWriter: ((notebookId: string, update: Uint8Array, authorId: string) => Promise<boolean>) | null = null;
 
   constructor(
     private readonly em: EntityManager,
@@ -45,10 +46,21 @@ export class DocumentsService {
     return { notebookId, state: Buffer.from(Y.encodeStateAsUpdate(doc)).toString('base64'), updatedAt: stored.updatedAt.toISOString() };
   }
 
+  /**
+   * Lets the co-editing rooms take HTTP edits of a document that is open, so
+   * people editing it live receive them; the writer answers false when no
+   * room has the document open.
+   */
+  useLiveWriter(writer: (notebookId: string, update: Uint8Array, authorId: string) => Promise<boolean>): void {
+    this.liveWriter = writer;
+  }
+
   /** Accepts one update from a person who may edit; refuses one that breaks the document schema. */
   async applyFromHttp(user: User, notebookId: string, base64: string): Promise<DocumentUpdateResponse> {
     await this.policy.authorize(user, notebookId, 'edit');
-    const saved = await this.append(notebookId, Buffer.from(base64, 'base64'), user.id);
+    const update = Buffer.from(base64, 'base64');
+    if (this.liveWriter && (await this.liveWriter(notebookId, update, user.id))) return { stored: true, updatedAt: new Date().toISOString() };
+    const saved = await this.append(notebookId, update, user.id);
     return { stored: true, updatedAt: saved.toISOString() };
   }
 
