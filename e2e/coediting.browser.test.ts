@@ -40,6 +40,12 @@ describe('two co-authors in one notebook, in Chromium', () => {
     await note.waitFor({ timeout: 15_000 });
     expect(await a.getByRole('complementary', { name: 'Review notes' }).getByText('Kofi Adjei').count()).toBeGreaterThan(0);
     await screenshot(a, 'coediting-comment-seen');
+
+    // A figure's settings open on one side are shown on the other.
+    await a.locator('.ProseMirror p').last().click();
+    await a.keyboard.press('End');
+    await a.getByRole('button', { name: 'Insert figure' }).click();
+    await b.getByText('Ines Marlow is changing this figure’s settings.').waitFor({ timeout: 15_000 });
     expect(errors).toEqual([]);
     await ctxA.close();
     await ctxB.close();

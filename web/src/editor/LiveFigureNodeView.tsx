@@ -32,6 +32,7 @@ export function LiveFigureNodeView({ node, editor, getPos, updateAttributes, sel
         </span>
       )}
       <FigureView
+        figureId={id}
         notebookId={notebookId}
         groupId={groupId}
         figureNumber={figureNumber}

@@ -4,7 +4,7 @@ import type * as Y from 'yjs';
 import { insertLiveNumber } from './commands';
 import { notebookEditorExtensions, type PresenceOptions } from './extensions';
 import { createFigureIndex } from './figure-index';
-import { NotebookEditorContext } from './notebook-context';
+import { NotebookEditorContext, type PresenceAwareness } from './notebook-context';
 import { NumberPicker } from './NumberPicker';
 import { Toolbar } from './Toolbar';
 import './editor.css';
@@ -55,7 +55,8 @@ export function NotebookEditor({ notebookId, groupId, doc, editable, onReady, pr
     if (editor && editor.isEditable !== editable) editor.setEditable(editable);
   }, [editor, editable]);
 
-  const context = useMemo(() => ({ notebookId, groupId, editable, figures }), [notebookId, groupId, editable, figures]);
+  const awareness = presence?.provider.awareness as PresenceAwareness | undefined;
+  const context = useMemo(() => ({ notebookId, groupId, editable, figures, awareness }), [notebookId, groupId, editable, figures, awareness]);
 
   return (
     <NotebookEditorContext.Provider value={context}>

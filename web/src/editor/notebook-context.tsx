@@ -8,6 +8,17 @@ export interface NotebookEditorContextValue {
   /** Lead authors and co-authors edit; reviewers and readers read. */
   editable: boolean;
   figures: FigureIndex;
+  /** Live presence (y-protocols awareness) when the document is open over the socket. */
+  awareness?: PresenceAwareness;
+}
+
+/** The part of y-protocols' Awareness the editor uses to show who is changing which figure. */
+export interface PresenceAwareness {
+  clientID: number;
+  getStates(): Map<number, Record<string, unknown>>;
+  setLocalStateField(field: string, value: unknown): void;
+  on(event: 'change', fn: () => void): void;
+  off(event: 'change', fn: () => void): void;
 }
 
 const fallback: NotebookEditorContextValue = { notebookId: '', groupId: '', editable: false, figures: createFigureIndex() };

@@ -11,12 +11,16 @@ import { FigureExports } from './FigureExports';
 import { exportName } from './exports';
 import { formatVersionsUsed } from './format';
 import { RecipeForm } from './RecipeForm';
+import { useFigureEditors } from './use-figure-editors';
+import { useNotebookEditor } from '../editor/notebook-context';
 import { specForResult } from './specs';
 
 /** Props of a live figure as the document holds it. */
 export interface FigureViewProps {
   notebookId: string;
   groupId: string;
+  /** The figure node's id, for telling others whose settings are open. */
+  figureId?: string | null;
   /** Position among the document's figures, from 1 (null while unknown). */
   figureNumber: number | null;
   recipe: Record<string, unknown> | null;
@@ -95,10 +99,11 @@ function Chart({ recipe, result, label }: { recipe: ParsedFigureRecipe; result: 
  * the methods note with the data versions and cautions, exports, and (for
  * authors) its settings opening right under it.
  */
-export function FigureView({ notebookId, groupId, figureNumber, recipe, caption, editable, onRecipeChange, onCaptionChange }: FigureViewProps) {
+export function FigureView({ notebookId, groupId, figureNumber, recipe, caption, editable, onRecipeChange, onCaptionChange, figureId = null }: FigureViewProps) {
   const parsed = useMemo(() => (recipe ? figureRecipeSchema.safeParse(recipe) : null), [recipe]);
   const valid = parsed?.success ? parsed.data : null;
   const [editing, setEditing] = useState(editable && !recipe);
+  const othersEditing = useFigureEditors(useNotebookEditor().awareness, figureId, editing);
   const query = useFigure(notebookId, valid);
   const series = useSeriesList(editing ? groupId : undefined, { pageSize: 200 });
   const label = figureNumber ? `Figure ${figureNumber}` : 'Figure';
@@ -156,6 +161,11 @@ export function FigureView({ notebookId, groupId, figureNumber, recipe, caption,
       </figcaption>
       {valid && query.data && <MethodsNote result={query.data} />}
       {valid && query.data && <FigureExports kind={valid.kind} result={query.data} spec={spec} baseName={exportName(figureNumber, kindLabel ?? 'figure')} />}
+      {othersEditing.length > 0 && (
+        <p className="upwell-figure-presence" role="status">
+          {othersEditing.join(', ')} {othersEditing.length === 1 ? 'is' : 'are'} changing this figure’s settings.
+        </p>
+      )}
       {editable && editing && (
         <div id={formId} className="upwell-figure-settings">
           <RecipeForm

@@ -14,6 +14,7 @@ import { useMe } from '../../api/auth';
 import { presenceColour, useLiveNotebookDocument } from '../../sync/use-live-document';
 import { PresenceRow } from './PresenceRow';
 import { AccessList } from './AccessList';
+import { CheckpointsPanel } from './CheckpointsPanel';
 import { EventSetsPanel } from './EventSetsPanel';
 import { NotebookSettings } from './NotebookSettings';
 import { SaveStatusLine } from './SaveStatus';
@@ -90,12 +91,16 @@ function NotebookWorkspace({ notebook }: { notebook: NonNullable<ReturnType<type
       <Tabs.Root defaultValue="events">
         <Tabs.List aria-label="About this notebook">
           <Tabs.Trigger value="events">Event sets</Tabs.Trigger>
+          <Tabs.Trigger value="checkpoints">Checkpoints</Tabs.Trigger>
           <Tabs.Trigger value="people">People</Tabs.Trigger>
           <Tabs.Trigger value="settings">Notebook</Tabs.Trigger>
         </Tabs.List>
         <Box pt="4">
           <Tabs.Content value="events">
             <EventSetsPanel notebookId={notebook.id} groupId={notebook.groupId} editable={editable} />
+          </Tabs.Content>
+          <Tabs.Content value="checkpoints">
+            <CheckpointsPanel notebookId={notebook.id} editable={editable} />
           </Tabs.Content>
           <Tabs.Content value="people">
             <AccessList notebook={notebook} />
