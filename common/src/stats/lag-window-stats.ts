@@ -1,9 +1,12 @@
 import type { LagPrefixSums } from './lag-prefix-sums';
 
-/** Slots of the lag kernel's output array. */
+/** Slot of the lag kernel's output array: number of pairs. */
 export const LAG_N = 0;
+/** Slot: Pearson's r (NaN when undefined). */
 export const LAG_R = 1;
+/** Slot: lag-1 autocorrelation of x over the pairs. */
 export const LAG_R1X = 2;
+/** Slot: lag-1 autocorrelation of y over the pairs. */
 export const LAG_R1Y = 3;
 
 /**
