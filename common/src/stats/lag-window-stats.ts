@@ -65,13 +65,21 @@ export function lagWindowStatsComplete(
     c3 += x[i + 3] * y[i + 3 + shift];
   }
   for (; i < stop; i++) c0 += x[i] * y[i + shift];
+  lagWindowStatsFromSums(px, xOff, py, yOff, len, c0 + c1 + (c2 + c3), out);
+}
+
+/**
+ * lagWindowStatsComplete with the window's cross-product Σ x·y already known (e.g. from
+ * laggedCrossProducts): everything else comes from the prefix sums in O(1).
+ */
+export function lagWindowStatsFromSums(px: LagPrefixSums, xOff: number, py: LagPrefixSums, yOff: number, len: number, sxy: number, out: Float64Array): void {
   const xEnd = xOff + len;
   const yEnd = yOff + len;
   finish(
     len,
     px.sum[xEnd] - px.sum[xOff], py.sum[yEnd] - py.sum[yOff],
     px.sumSq[xEnd] - px.sumSq[xOff], py.sumSq[yEnd] - py.sumSq[yOff],
-    c0 + c1 + (c2 + c3),
+    sxy,
     len - 1,
     px.lag1[xEnd - 1] - px.lag1[xOff], py.lag1[yEnd - 1] - py.lag1[yOff],
     // Over adjacent pairs the leading members are all but the last value, the trailing all but the first.
