@@ -58,6 +58,7 @@ export * from './units/convert';
 export * from './grid/earth-radius';
 export * from './grid/edges-from-centres';
 export * from './grid/cell-areas';
+export * from './grid/cell-areas-from-centres';
 export * from './grid/area-mean';
 export * from './grid/area-mean-series';
 export * from './grid/zonal-mean';

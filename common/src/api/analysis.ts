@@ -69,7 +69,9 @@ export const anomalyResponseSchema = z.object({
   climatology: z.array(nullableNumber).length(12),
   warnings: z.array(z.string()),
 });
+/** Type of a parsed body, inferred from anomalyRequestSchema. */
 export type AnomalyRequest = z.infer<typeof anomalyRequestSchema>;
+/** Type of a parsed result, inferred from anomalyResponseSchema. */
 export type AnomalyResponse = z.infer<typeof anomalyResponseSchema>;
 /** Runs the anomaly route on a parsed body. */
 export function runAnomaly(body: AnomalyRequest): AnomalyResponse {
@@ -88,7 +90,9 @@ export const lagCorrelationRequestSchema = z.object({
 export const lagCorrelationResponseSchema = z.object({
   lags: z.array(z.object({ lag: z.number().int(), r: nullableNumber, n: z.number().int(), nEff: nullableNumber, p: nullableNumber })),
 });
+/** Type of a parsed body, inferred from lagCorrelationRequestSchema. */
 export type LagCorrelationRequest = z.infer<typeof lagCorrelationRequestSchema>;
+/** Type of a parsed result, inferred from lagCorrelationResponseSchema. */
 export type LagCorrelationResponse = z.infer<typeof lagCorrelationResponseSchema>;
 /** Runs the lag-correlation route on a parsed body. */
 export function runLagCorrelation(body: LagCorrelationRequest): LagCorrelationResponse {
@@ -118,7 +122,9 @@ export const eventsResponseSchema = z.object({
     }),
   ),
 });
+/** Type of a parsed body, inferred from eventsRequestSchema. */
 export type EventsRequest = z.infer<typeof eventsRequestSchema>;
+/** Type of a parsed result, inferred from eventsResponseSchema. */
 export type EventsResponse = z.infer<typeof eventsResponseSchema>;
 /** Runs the events route on a parsed body. */
 export function runEvents(body: EventsRequest): EventsResponse {
@@ -156,7 +162,9 @@ export const compositeResponseSchema = z.object({
   n: z.array(z.number().int()),
   members: z.array(z.array(nullableNumber)),
 });
+/** Type of a parsed body, inferred from compositeRequestSchema. */
 export type CompositeRequest = z.infer<typeof compositeRequestSchema>;
+/** Type of a parsed result, inferred from compositeResponseSchema. */
 export type CompositeResponse = z.infer<typeof compositeResponseSchema>;
 /** Runs the composite route on a parsed body. */
 export function runComposite(body: CompositeRequest): CompositeResponse {
@@ -174,7 +182,9 @@ export const trendResponseSchema = z.object({
   r2: nullableNumber,
   n: z.number().int(),
 });
+/** Type of a parsed body, inferred from trendRequestSchema. */
 export type TrendRequest = z.infer<typeof trendRequestSchema>;
+/** Type of a parsed result, inferred from trendResponseSchema. */
 export type TrendResponse = z.infer<typeof trendResponseSchema>;
 /** Runs the trend route on a parsed body. */
 export function runTrend(body: TrendRequest): TrendResponse {
@@ -197,7 +207,9 @@ export const budgetResponseSchema = z.object({
   rmsResidual: nullableNumber,
   relativeResidual: nullableNumber,
 });
+/** Type of a parsed body, inferred from budgetRequestSchema. */
 export type BudgetRequest = z.infer<typeof budgetRequestSchema>;
+/** Type of a parsed result, inferred from budgetResponseSchema. */
 export type BudgetResponse = z.infer<typeof budgetResponseSchema>;
 /** Runs the budget route on a parsed body. */
 export function runBudget(body: BudgetRequest): BudgetResponse {
@@ -211,7 +223,9 @@ export const integrateRequestSchema = z
   .refine((b) => b.from <= b.to, { message: 'from must not be after to', path: ['to'] });
 /** Response of POST /api/analysis/integrate. */
 export const integrateResponseSchema = z.object({ total: z.number(), units: z.string() });
+/** Type of a parsed body, inferred from integrateRequestSchema. */
 export type IntegrateRequest = z.infer<typeof integrateRequestSchema>;
+/** Type of a parsed result, inferred from integrateResponseSchema. */
 export type IntegrateResponse = z.infer<typeof integrateResponseSchema>;
 /** Runs the integrate route on a parsed body. */
 export function runIntegrate(body: IntegrateRequest): IntegrateResponse {

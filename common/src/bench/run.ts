@@ -96,13 +96,12 @@ function blockLandMask(nlat: number, nlon: number): Uint8Array {
   return land;
 }
 
-/** Times each case: 2 warm-up runs, then `repeats` timed runs. */
-export function runBench(cases: BenchCase[] = BENCH_CASES, repeats = 7): BenchResult[] {
+/** Times each case: `warmups` untimed runs (so V8 reaches its optimised code), then `repeats` timed runs. */
+export function runBench(cases: BenchCase[] = BENCH_CASES, repeats = 10, warmups = 5): BenchResult[] {
   const gc = (globalThis as { gc?: () => void }).gc;
   return cases.map((c) => {
     const run = c.setup();
-    run();
-    run();
+    for (let w = 0; w < warmups; w++) run();
     const times: number[] = [];
     for (let r = 0; r < repeats; r++) {
       gc?.();

@@ -90,12 +90,16 @@ export function anomaly(req: AnomalyInput): AnomalyOutput {
 
 /** x − climatology[calendar month], missing (NaN) written as null. */
 function subtractInto(x: Float64Array, start: number, climatology: number[]): (number | null)[] {
-  const out: (number | null)[] = [];
+  // Pre-sized and filled with doubles first: the array stays unboxed unless a null is needed.
+  const out: (number | null)[] = new Array(x.length);
   let cal = start % 12;
+  let anyMissing = false;
   for (let i = 0; i < x.length; i++) {
     const v = x[i] - climatology[cal];
-    out.push(v === v ? v : null);
+    out[i] = v;
+    if (v !== v) anyMissing = true;
     cal = cal === 11 ? 0 : cal + 1;
   }
+  if (anyMissing) for (let i = 0; i < out.length; i++) if (out[i] !== out[i]) out[i] = null;
   return out;
 }

@@ -4,7 +4,8 @@ import type { MonthlySeries } from '../series/types';
 import { correlationPValue } from './correlation-p-value';
 import { effectiveSampleSize } from './effective-sample-size';
 import { lagPrefixSums } from './lag-prefix-sums';
-import { LAG_N, LAG_R, LAG_R1X, LAG_R1Y, lagWindowStats, lagWindowStatsComplete } from './lag-window-stats';
+import { LAG_N, LAG_R, LAG_R1X, LAG_R1Y, lagWindowStats, lagWindowStatsComplete, lagWindowStatsFromSums } from './lag-window-stats';
+import { laggedCrossProducts } from './lagged-cross-products';
 import { prepareForCorrelation } from './prepare-for-correlation';
 import { averageRanks } from './rank';
 import { scratchFloat64, scratchSlot } from './scratch';
@@ -54,10 +55,14 @@ export function lagCorrelation(req: LagCorrelationInput): LagCorrelationOutput {
   // Prepared in place: the raw doubles are not needed again (Spearman ranks the raw values instead).
   const px = spearman ? xs : prepareForCorrelation(xs, xs);
   const py = spearman ? ys : prepareForCorrelation(ys, ys);
-  // Gap-free windows take the prefix-sum path (one multiply-add per pair); others the general kernel.
+  // Gap-free windows take the prefix-sum paths (one multiply-add per pair); others the general kernel.
   const sx = lagPrefixSums(px, work.subarray(nx + ny, nx + ny + 4 * (nx + 1)));
   const sy = lagPrefixSums(py, work.subarray(nx + ny + 4 * (nx + 1), 5 * (nx + ny) + 8));
   const out = new Float64Array(4);
+  // Both series gap-free (the usual case): all cross-products in one register-blocked pass.
+  const gapFree = !spearman && sx.missing[nx] === 0 && sy.missing[ny] === 0;
+  const cross = gapFree ? new Float64Array(2 * req.maxLag + 1) : null;
+  if (cross) laggedCrossProducts(px, py, d, req.maxLag, cross);
   const lags: LagCorrelationRow[] = [];
   for (let k = -req.maxLag; k <= req.maxLag; k++) {
     // x[i] pairs with y[i + k − d]; the window is where both indices exist.
@@ -68,15 +73,14 @@ export function lagCorrelation(req: LagCorrelationInput): LagCorrelationOutput {
       lags.push({ lag: k, r: null, n: 0, nEff: null, p: null });
       continue;
     }
+    const j0 = i0 + k - d;
     if (spearman) {
-      const [rx, ry] = rankedWindow(xs, i0, ys, i0 + k - d, len);
+      const [rx, ry] = rankedWindow(xs, i0, ys, j0, len);
       lagWindowStats(rx, 0, ry, 0, len, out);
-    } else {
-      const j0 = i0 + k - d;
-      const complete = sx.missing[i0 + len] === sx.missing[i0] && sy.missing[j0 + len] === sy.missing[j0];
-      if (complete) lagWindowStatsComplete(px, sx, i0, py, sy, j0, len, out);
-      else lagWindowStats(px, i0, py, j0, len, out);
-    }
+    } else if (cross) lagWindowStatsFromSums(sx, i0, sy, j0, len, cross[k + req.maxLag], out);
+    else if (sx.missing[i0 + len] === sx.missing[i0] && sy.missing[j0 + len] === sy.missing[j0]) {
+      lagWindowStatsComplete(px, sx, i0, py, sy, j0, len, out);
+    } else lagWindowStats(px, i0, py, j0, len, out);
     lags.push(toRow(k, out));
   }
   return { lags };

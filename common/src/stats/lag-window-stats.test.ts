@@ -75,4 +75,11 @@ describe('prepareForCorrelation()', () => {
     expect(Math.abs(p[1])).toBeGreaterThan(0.5);
     expect(p[2]).toBeNaN();
   });
+
+  it('still centres values near 1e308 whose plain sum overflows', () => {
+    const p = prepareForCorrelation(Float64Array.from([1.5e308, 1.6e308, 1.7e308]));
+    expect(p.every(Number.isFinite)).toBe(true);
+    expect(p[1]).toBeCloseTo(0, 12);
+    expect(p[0]).toBeCloseTo(-p[2], 12);
+  });
 });

@@ -1,9 +1,12 @@
 import type { LagPrefixSums } from './lag-prefix-sums';
 
-/** Slots of the lag kernel's output array. */
+/** Slot of the lag kernel's output array: number of pairs. */
 export const LAG_N = 0;
+/** Slot: Pearson's r (NaN when undefined). */
 export const LAG_R = 1;
+/** Slot: lag-1 autocorrelation of x over the pairs. */
 export const LAG_R1X = 2;
+/** Slot: lag-1 autocorrelation of y over the pairs. */
 export const LAG_R1Y = 3;
 
 /**
@@ -62,13 +65,21 @@ export function lagWindowStatsComplete(
     c3 += x[i + 3] * y[i + 3 + shift];
   }
   for (; i < stop; i++) c0 += x[i] * y[i + shift];
+  lagWindowStatsFromSums(px, xOff, py, yOff, len, c0 + c1 + (c2 + c3), out);
+}
+
+/**
+ * lagWindowStatsComplete with the window's cross-product Σ x·y already known (e.g. from
+ * laggedCrossProducts): everything else comes from the prefix sums in O(1).
+ */
+export function lagWindowStatsFromSums(px: LagPrefixSums, xOff: number, py: LagPrefixSums, yOff: number, len: number, sxy: number, out: Float64Array): void {
   const xEnd = xOff + len;
   const yEnd = yOff + len;
   finish(
     len,
     px.sum[xEnd] - px.sum[xOff], py.sum[yEnd] - py.sum[yOff],
     px.sumSq[xEnd] - px.sumSq[xOff], py.sumSq[yEnd] - py.sumSq[yOff],
-    c0 + c1 + (c2 + c3),
+    sxy,
     len - 1,
     px.lag1[xEnd - 1] - px.lag1[xOff], py.lag1[yEnd - 1] - py.lag1[yOff],
     // Over adjacent pairs the leading members are all but the last value, the trailing all but the first.

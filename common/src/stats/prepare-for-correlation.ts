@@ -6,11 +6,21 @@
  */
 // `out` (length ≥ x.length) may be x itself or a scratch buffer.
 export function prepareForCorrelation(x: Float64Array, out: Float64Array = new Float64Array(x.length)): Float64Array {
+  // Any centre near the mean serves (correlation ignores shifts), so a plain sum is enough here;
+  // values near 1e308 would overflow it, hence the running-mean fallback for a non-finite sum.
   let n = 0;
-  let mean = 0;
+  let sum = 0;
   for (let i = 0; i < x.length; i++) {
     const v = x[i];
-    if (v === v) mean += (v - mean) / ++n;
+    if (v === v) {
+      sum += v;
+      n++;
+    }
+  }
+  let mean = n > 0 ? sum / n : 0;
+  if (!Number.isFinite(mean)) {
+    mean = 0;
+    for (let i = 0, k = 0; i < x.length; i++) if (x[i] === x[i]) mean += (x[i] - mean) / ++k;
   }
   let max = 0;
   for (let i = 0; i < x.length; i++) {
