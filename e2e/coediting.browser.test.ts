@@ -6,7 +6,7 @@ import { apiAs, signInContext, signUp } from './support/api';
 describe('two co-authors in one notebook, in Chromium', () => {
   const h = useServerAndBrowser();
 
-  it('one types; the other sees the text and the caret with the first person’s name', async () => {
+  it('one types and the other sees the text and named caret; a comment, figure settings and offline edits cross too', async () => {
     const lead = await signUp(h.server.url, 'Ines Marlow', 'ines.marlow@example.org');
     const co = await signUp(h.server.url, 'Kofi Adjei', 'kofi.adjei@example.org');
     const group = await apiAs<{ id: string }>(h.server.url, lead.token, '/groups', { name: 'Warm pool group' });
@@ -47,6 +47,17 @@ describe('two co-authors in one notebook, in Chromium', () => {
     await a.getByRole('button', { name: 'Insert figure' }).click();
     await b.getByText('Ines Marlow is changing this figure’s settings.').waitFor({ timeout: 15_000 });
     expect(errors).toEqual([]);
+
+    // Offline: the first person keeps typing with the network cut; the edit reaches the other once it returns.
+    await ctxA.setOffline(true);
+    await a.getByText(/Offline/).waitFor({ timeout: 20_000 });
+    await a.locator('.ProseMirror p', { hasText: 'recharge phase' }).click();
+    await a.keyboard.press('End');
+    await a.keyboard.type(' Written while offline.');
+    await ctxA.setOffline(false);
+    await b.locator('.ProseMirror p', { hasText: 'Written while offline.' }).waitFor({ timeout: 30_000 });
+    await a.getByText('All changes saved').waitFor({ timeout: 15_000 });
+    expect(errors.filter((e) => !/ERR_INTERNET_DISCONNECTED|WebSocket|socket\.io|Failed to load resource/.test(e))).toEqual([]);
     await ctxA.close();
     await ctxB.close();
   });
