@@ -1,8 +1,9 @@
-import { Button, Flex, Grid, Select, Text, TextArea, TextField } from '@radix-ui/themes';
+import { Button, Flex, Grid, Text, TextArea, TextField } from '@radix-ui/themes';
 import { useState, type FormEvent } from 'react';
-import { DATA_ORIGINS, SERIES_KIND_LABELS, SERIES_KINDS, SERIES_LIMITS, type DataOrigin, type SeriesDetail, type SeriesKind } from '@upwell/common';
+import { DATA_ORIGINS, SERIES_KIND_LABELS, SERIES_KINDS, SERIES_LIMITS, type DataOrigin, type SeriesDetail } from '@upwell/common';
 import { useUpdateSeries } from '../../api/series';
 import { ErrorNote } from '../../components/ErrorNote';
+import { EnumSelect } from '../../components/EnumSelect';
 
 export const ORIGIN_LABELS: Record<DataOrigin, string> = {
   'model-output': 'Model output',
@@ -46,16 +47,7 @@ export function MetadataForm({ series }: { series: SeriesDetail }) {
           <Text as="div" size="2" weight="bold" mb="1">
             Kind
           </Text>
-          <Select.Root value={form.kind} onValueChange={(v) => setForm({ ...form, kind: v as SeriesKind })}>
-            <Select.Trigger aria-label="Kind" style={{ width: '100%' }} />
-            <Select.Content>
-              {SERIES_KINDS.map((k) => (
-                <Select.Item key={k} value={k}>
-                  {SERIES_KIND_LABELS[k]}
-                </Select.Item>
-              ))}
-            </Select.Content>
-          </Select.Root>
+          <EnumSelect label="Kind" value={form.kind} values={SERIES_KINDS} labels={SERIES_KIND_LABELS} onChange={(kind) => setForm({ ...form, kind })} style={{ width: '100%' }} />
         </label>
         {text('variable', 'Variable')}
         {text('units', 'Units')}
@@ -66,16 +58,7 @@ export function MetadataForm({ series }: { series: SeriesDetail }) {
           <Text as="div" size="2" weight="bold" mb="1">
             Origin
           </Text>
-          <Select.Root value={form.origin} onValueChange={(v) => setForm({ ...form, origin: v as DataOrigin })}>
-            <Select.Trigger aria-label="Origin" style={{ width: '100%' }} />
-            <Select.Content>
-              {DATA_ORIGINS.map((o) => (
-                <Select.Item key={o} value={o}>
-                  {ORIGIN_LABELS[o]}
-                </Select.Item>
-              ))}
-            </Select.Content>
-          </Select.Root>
+          <EnumSelect label="Origin" value={form.origin} values={DATA_ORIGINS} labels={ORIGIN_LABELS} onChange={(origin) => setForm({ ...form, origin })} style={{ width: '100%' }} />
         </label>
       </Grid>
       <label>

@@ -12,6 +12,7 @@ import {
 import { useSeriesList } from '../../api/series';
 import { useImportUpload } from '../../api/uploads';
 import { ErrorNote } from '../../components/ErrorNote';
+import { EnumSelect } from '../../components/EnumSelect';
 import { TableCaption } from '../../components/TableCaption';
 import { ORIGIN_LABELS } from '../Series/MetadataForm';
 
@@ -177,16 +178,7 @@ export function ImportMapping({ groupId, preview, onDone, onDiscard }: { groupId
                     <TextField.Root size="1" aria-label={`Name for ${r.column}`} value={r.name} onChange={(e) => set(i, { name: e.target.value })} />
                   </Table.Cell>
                   <Table.Cell>
-                    <Select.Root size="1" value={r.kind} onValueChange={(v) => set(i, { kind: v as SeriesKind })}>
-                      <Select.Trigger aria-label={`Kind for ${r.column}`} />
-                      <Select.Content>
-                        {SERIES_KINDS.map((k) => (
-                          <Select.Item key={k} value={k}>
-                            {SERIES_KIND_LABELS[k]}
-                          </Select.Item>
-                        ))}
-                      </Select.Content>
-                    </Select.Root>
+                    <EnumSelect size="1" label={`Kind for ${r.column}`} value={r.kind} values={SERIES_KINDS} labels={SERIES_KIND_LABELS} onChange={(kind) => set(i, { kind })} />
                   </Table.Cell>
                   <Table.Cell>
                     <TextField.Root size="1" aria-label={`Variable for ${r.column}`} value={r.variable} onChange={(e) => set(i, { variable: e.target.value })} />
@@ -233,16 +225,7 @@ export function ImportMapping({ groupId, preview, onDone, onDiscard }: { groupId
         <Text size="2" weight="bold">
           These numbers are
         </Text>
-        <Select.Root value={origin} onValueChange={(v) => setOrigin(v as DataOrigin)}>
-          <Select.Trigger aria-label="Origin of the data" />
-          <Select.Content>
-            {DATA_ORIGINS.map((o) => (
-              <Select.Item key={o} value={o}>
-                {ORIGIN_LABELS[o]}
-              </Select.Item>
-            ))}
-          </Select.Content>
-        </Select.Root>
+        <EnumSelect label="Origin of the data" value={origin} values={DATA_ORIGINS} labels={ORIGIN_LABELS} onChange={setOrigin} />
       </Flex>
       <ErrorNote error={importer.error} />
       <Flex gap="2" justify="end">
