@@ -22,6 +22,9 @@ import { CollaborationModule } from './collaboration/collaboration.module';
 import { CheckpointsModule } from './checkpoints/checkpoints.module';
 import { CommentsModule } from './comments/comments.module';
 import { NotificationsModule } from './notifications/notifications.module';
+// Notebook files and the demo (issue 8)
+import { NotebookFilesModule } from './notebook-files/notebook-files.module';
+import { DemoModule } from './demo/demo.module';
 
 /** The whole server, built for one resolved configuration. */
 @Module({})
@@ -54,6 +57,8 @@ export class AppModule {
         CheckpointsModule,
         CommentsModule,
         NotificationsModule,
+        NotebookFilesModule,
+        DemoModule,
       ],
       controllers: [HealthController],
       providers: [MigrateOnStart],

@@ -12,11 +12,11 @@ export interface TestApp {
   close(): Promise<void>;
 }
 
-/** Starts the real app (NestFactory, not a testing module) over HTTP on port 0. */
+/** Starts the real app (NestFactory, not a testing module) over HTTP on port 0; without the demo seed unless `SEED_DEMO` is given. */
 export async function startTestApp(env: Record<string, string> = {}): Promise<TestApp> {
   const dataDir = mkdtempSync(join(tmpdir(), 'upwell-test-'));
   const { app } = await buildApp(
-    { DATA_DIR: dataDir, PORT: '0', WEB_DIST: '', AUTH_ATTEMPTS_PER_MINUTE: '10000', ...env },
+    { DATA_DIR: dataDir, PORT: '0', WEB_DIST: '', AUTH_ATTEMPTS_PER_MINUTE: '10000', SEED_DEMO: 'false', ...env },
     { logger: false },
   );
   await app.listen(0, '127.0.0.1');

@@ -12,3 +12,6 @@ export * from './documents';
 export * from './checkpoints';
 export * from './comments';
 export * from './notifications';
+// Notebook files and the demo (issue 8)
+export * from './notebook-file';
+export * from './demo';

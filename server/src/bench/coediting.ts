@@ -98,7 +98,7 @@ export async function runCoeditingBench(options: CoeditingBenchOptions = {}): Pr
   const intervalMs = Math.min(10_000, Math.max(10, options.intervalMs ?? 200));
   const durationS = Math.min(600, Math.max(1, options.durationS ?? 30));
   const dataDir = mkdtempSync(join(tmpdir(), 'upwell-coediting-bench-'));
-  const server = fork(__filename, ['--serve'], { env: { ...process.env, DATA_DIR: dataDir, PORT: '0', WEB_DIST: '', AUTH_ATTEMPTS_PER_MINUTE: '100000' }, stdio: 'inherit' });
+  const server = fork(__filename, ['--serve'], { env: { ...process.env, DATA_DIR: dataDir, PORT: '0', WEB_DIST: '', AUTH_ATTEMPTS_PER_MINUTE: '100000', SEED_DEMO: 'false' }, stdio: 'inherit' });
   const sockets: Socket[] = [];
   try {
     const port = await new Promise<number>((ok, fail) => {

@@ -38,7 +38,7 @@ export async function runFiguresBench(options: FiguresBenchOptions = {}): Promis
   const iterations = Math.min(1000, Math.max(1, Math.floor(options.iterations ?? 50)));
   const months = options.months ?? MONTHS_DEFAULT;
   const dataDir = mkdtempSync(join(tmpdir(), 'upwell-figures-bench-'));
-  const { app } = await buildApp({ DATA_DIR: dataDir, PORT: '0', WEB_DIST: '', AUTH_ATTEMPTS_PER_MINUTE: '10000' }, { logger: false });
+  const { app } = await buildApp({ DATA_DIR: dataDir, PORT: '0', WEB_DIST: '', AUTH_ATTEMPTS_PER_MINUTE: '10000', SEED_DEMO: 'false' }, { logger: false });
   try {
     await app.listen(0, '127.0.0.1');
     const { port } = app.getHttpServer().address() as { port: number };

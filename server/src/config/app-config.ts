@@ -17,6 +17,8 @@ export interface AppConfig {
   authAttemptsPerMinute: number;
   /** Largest upload accepted, in bytes (streamed to disk, never held in memory). */
   uploadMaxBytes: number;
+  /** Seed the demo group, people, series and notebooks on start (SEED_DEMO, on unless "false"). */
+  seedDemo: boolean;
 }
 
 /** Name under which the config is registered with @nestjs/config. */
@@ -48,6 +50,12 @@ function jwtSecret(dataDir: string, given: string | undefined): string {
   return secret;
 }
 
+function seedDemo(raw: string | undefined): boolean {
+  if (raw === undefined || raw === '' || raw === 'true') return true;
+  if (raw === 'false') return false;
+  throw new Error(`SEED_DEMO must be "true" or "false", got "${raw}"`);
+}
+
 /** Reads and checks the environment; creates DATA_DIR and the secret if missing. */
 export function loadAppConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
   const dataDir = resolve(env.DATA_DIR || './data');
@@ -63,5 +71,6 @@ export function loadAppConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     webDist: webDist && existsSync(join(webDist, 'index.html')) ? webDist : null,
     authAttemptsPerMinute: positiveInt('AUTH_ATTEMPTS_PER_MINUTE', env.AUTH_ATTEMPTS_PER_MINUTE, 20),
     uploadMaxBytes: positiveInt('UPLOAD_MAX_BYTES', env.UPLOAD_MAX_BYTES, 2 * 1024 ** 3),
+    seedDemo: seedDemo(env.SEED_DEMO),
   };
 }
