@@ -17,3 +17,7 @@ export const demoInfoSchema = z.object({
   people: z.array(demoPersonSchema),
 });
 export type DemoInfo = z.infer<typeof demoInfoSchema>;
+
+/** Answer of GET /api/demo/status (public, always 200). */
+export const demoStatusSchema = z.object({ enabled: z.boolean() });
+export type DemoStatus = z.infer<typeof demoStatusSchema>;

@@ -1,6 +1,6 @@
 import { Controller, Get, NotFoundException } from '@nestjs/common';
 import { ApiOperation, ApiTags } from '@nestjs/swagger';
-import type { DemoInfo } from '@upwell/common';
+import type { DemoInfo, DemoStatus } from '@upwell/common';
 import { Public } from '../auth/public.decorator';
 import { DemoSeed } from './seed/demo-seed.service';
 
@@ -8,6 +8,17 @@ import { DemoSeed } from './seed/demo-seed.service';
 @Controller('demo')
 export class DemoController {
   constructor(private readonly seed: DemoSeed) {}
+
+  /**
+   * Always 200, so the sign-in page can ask without a 404 in the browser's
+   * console on servers that run without the demo; then it asks GET /api/demo.
+   */
+  @Public()
+  @Get('status')
+  @ApiOperation({ summary: 'Whether the demo seed is in use: { enabled: boolean } (public)' })
+  async status(): Promise<DemoStatus> {
+    return { enabled: (await this.seed.info()) !== null };
+  }
 
   @Public()
   @Get()

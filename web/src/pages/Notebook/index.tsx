@@ -17,6 +17,7 @@ import { AccessList } from './AccessList';
 import { CheckpointsPanel } from './CheckpointsPanel';
 import { EventSetsPanel } from './EventSetsPanel';
 import { NotebookSettings } from './NotebookSettings';
+import { ExportNotebookFile } from './ExportNotebookFile';
 import { SaveStatusLine } from './SaveStatus';
 
 /** One notebook: the manuscript with its live figures, and beneath it event sets, people and settings. */
@@ -109,6 +110,7 @@ function NotebookWorkspace({ notebook }: { notebook: NonNullable<ReturnType<type
             <Heading as="h2" size="4" mb="2">
               This notebook
             </Heading>
+            <ExportNotebookFile notebook={notebook} />
             <NotebookSettings notebook={notebook} />
           </Tabs.Content>
         </Box>

@@ -10,6 +10,7 @@ import { ErrorNote } from '../../components/ErrorNote';
 import { PageTitle } from '../../components/PageTitle';
 import { formatWhen } from '../../components/dates';
 import { NewNotebookDialog } from './NewNotebookDialog';
+import { ImportNotebookFile } from './ImportNotebookFile';
 
 /** The group's notebooks that the person holds a role on. */
 export default function NotebooksPage() {
@@ -34,7 +35,13 @@ export default function NotebooksPage() {
   const rows = notebooks.data ?? [];
   return (
     <>
-      <PageTitle title="Notebooks" subtitle={group.name} actions={<NewNotebookDialog groupId={group.id} />} />
+      <PageTitle title="Notebooks" subtitle={group.name} actions={
+          <Flex gap="3" align="start">
+            <ImportNotebookFile groupId={group.id} />
+            <NewNotebookDialog groupId={group.id} />
+          </Flex>
+        }
+      />
       <Flex gap="3" mb="3" align="center" wrap="wrap">
         <TextField.Root
           type="search"

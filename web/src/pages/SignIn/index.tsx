@@ -4,6 +4,7 @@ import { Link as RouterLink, useLocation, useNavigate } from 'react-router';
 import { useLogin } from '../../api/auth';
 import { ErrorNote } from '../../components/ErrorNote';
 import { AuthFrame } from '../../components/AuthFrame';
+import { DemoAccounts } from './DemoAccounts';
 
 /** Sign-in with e-mail and password. */
 export default function SignInPage() {
@@ -52,6 +53,12 @@ export default function SignInPage() {
           </Flex>
         </form>
       </Card>
+      <DemoAccounts
+        onPick={(p) => {
+          setEmail(p.email);
+          setPassword(p.password);
+        }}
+      />
       <Box />
     </AuthFrame>
   );
