@@ -23,6 +23,10 @@ export interface RechargeOscillatorParams {
   noiseH: number;
   /** State-dependent (multiplicative) noise B: σT is scaled by (1 + B·T), per °C, floored at 0. */
   multiplicativeNoise: number;
+  /** Nonlinear heating a: adds a·T² to dT/dt, °C⁻¹ month⁻¹ (warm events grow faster). */
+  nonlinearHeating: number;
+  /** Cubic damping c: adds −c·T³ to dT/dt, °C⁻² month⁻¹ (keeps the quadratic term bounded). */
+  cubicDamping: number;
   /** Euler–Maruyama steps per month. */
   stepsPerMonth: number;
   /** Months simulated and thrown away before the first month kept, so the start is forgotten. */
@@ -32,7 +36,7 @@ export interface RechargeOscillatorParams {
 /**
  * The demo's values, chosen (not fitted) so that the index has a 3–5-year period, an anomaly sd
  * near 0.9 °C, events locked to the season (growth largest in boreal late summer, peaks near the
- * turn of the year) and warm events stronger than cold ones. For the linear part the complex
+ * turn of the year) and warm events stronger than cold ones (positive skewness). For the linear part the complex
  * eigenvalues of [[R0, F1], [−F2, −ε]] give a decay of (R0 − ε)/2 = −0.045 per month and a
  * frequency √(F1·F2 − ((R0 + ε)/2)²) ≈ 2π/47 per month.
  */
@@ -46,6 +50,8 @@ export const DEMO_OSCILLATOR: RechargeOscillatorParams = {
   noiseT: 0.13,
   noiseH: 3.6,
   multiplicativeNoise: 0.4,
+  nonlinearHeating: 0.02,
+  cubicDamping: 0.004,
   stepsPerMonth: 30,
   spinUpMonths: 120,
 };
@@ -61,10 +67,12 @@ export interface OscillatorRun {
  * ENSO. Part I: Conceptual model", J. Atmos. Sci. 54, 811–829, in its stochastically forced form
  * with a seasonally varying growth rate (as in Burgers, Jin & van Oldenborgh 2005, GRL 32, L13706,
  * and Levine & Jin 2010, J. Atmos. Sci. 67, 529–542 — forms from memory):
- *   dT/dt = R(t)·T + F1·h + σT·(1 + B·T)·ξT,   dh/dt = −ε·h − F2·T + σh·ξh,
+ *   dT/dt = R(t)·T + a·T² − c·T³ + F1·h + σT·(1 + B·T)·ξT,   dh/dt = −ε·h − F2·T + σh·ξh,
  *   R(t) = R0 + Ra·cos(2π(t − phase)), t in years.
  * The (1 + B·T) factor is state-dependent noise (Jin, Lin, Timmermann & Zhao 2007, GRL 34, L03807,
- * from memory), which makes warm events the stronger ones. Euler–Maruyama with `stepsPerMonth`
+ * from memory): westerly bursts come more often in warm states. The small a·T² term stands for
+ * nonlinear dynamical heating (An & Jin 2004, J. Climate 17, 2399–2412, from memory), which makes
+ * warm events the stronger ones (positive skewness); −c·T³ keeps it bounded. Euler–Maruyama with `stepsPerMonth`
  * steps of one month's 1/stepsPerMonth (Kloeden & Platen 1992, §9.1): each step draws ξT then ξh.
  * The run starts at rest, `spinUpMonths` before the first month kept.
  */
@@ -85,7 +93,7 @@ export function runRechargeOscillator(random: RandomStream, months: number, p: R
       const xiT = random.gaussian();
       const xiH = random.gaussian();
       const noiseScale = Math.max(0, 1 + p.multiplicativeNoise * t);
-      const nextT = t + (growth * t + p.thermoclineFeedback * h) * dt + p.noiseT * noiseScale * sqrtDt * xiT;
+      const nextT = t + (growth * t + p.nonlinearHeating * t * t - p.cubicDamping * t * t * t + p.thermoclineFeedback * h) * dt + p.noiseT * noiseScale * sqrtDt * xiT;
       const nextH = h + (-p.thermoclineDamping * h - p.rechargeCoupling * t) * dt + p.noiseH * sqrtDt * xiH;
       t = nextT;
       h = nextH;
