@@ -3,7 +3,9 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { parseCsvForImport } from '../../series/csv';
-import { describeNetcdf, openNetcdf } from '../../series/netcdf';
+import { anomaly, pearson } from '@upwell/common';
+import { describeNetcdf, openNetcdf, zonalMeanField } from '../../series/netcdf';
+import { generateDemoScenario } from './demo-scenario';
 import { BUDGET_RESIDUAL_MAX } from './carbon-budget';
 import { DEMO_FILES, type DemoManifest } from './demo-manifest';
 import { writeDemoFiles } from './write-demo-files';
@@ -96,6 +98,36 @@ describe('writeDemoFiles()', () => {
       const d = describeNetcdf(f);
       expect(d.time).toMatchObject({ start: '1980-01', end: '2025-12', months: 552, calendar: 'standard' });
       expect(d.candidates.find((c) => c.name === 'surface_dic')).toMatchObject({ kind: 'field', layout: 'time-lat-lon' });
+    } finally {
+      f.close();
+    }
+  });
+
+  it('has a zonal mean (the project reducer) whose index-driven anomaly reaches 15–19° later than the equator', async () => {
+    const f = await openNetcdf(join(root, 'a', DEMO_FILES.field));
+    try {
+      const z = zonalMeanField(f, 'surface_dic', { lon: [120, 240], lat: [-20, 20] });
+      const base = { from: '1991-01', to: '2020-12' };
+      const anom = (values: number[]) => anomaly({ series: { start: z.start, values }, base }).anomaly.values as number[];
+      const index = anom(Array.from(generateDemoScenario({ release: 1 }).index));
+      // Lag (months) at which the row's anomaly is most negatively correlated with the index.
+      const bestLag = (row: number) => {
+        const a = anom(z.values.map((r) => r[row]!));
+        let best = 0;
+        let bestR = Infinity;
+        for (let lag = 0; lag <= 12; lag++) {
+          const r = pearson(index.slice(0, index.length - lag), a.slice(lag))!;
+          if (r < bestR) [best, bestR] = [lag, r];
+        }
+        return { lag: best, r: bestR };
+      };
+      const equator = bestLag(z.lat.indexOf(1));
+      const north = bestLag(z.lat.indexOf(17));
+      const south = bestLag(z.lat.indexOf(-17));
+      expect(equator.r).toBeLessThan(-0.8);
+      expect(equator.lag).toBeLessThanOrEqual(1);
+      expect(north.lag).toBeGreaterThanOrEqual(equator.lag + 3);
+      expect(south.lag).toBeGreaterThanOrEqual(equator.lag + 3);
     } finally {
       f.close();
     }
