@@ -37,7 +37,7 @@ function refused(message: string, issues: InputIssue[]): BadRequestException {
 
 /** A file name from a notebook title: lower case, dashes, the format's ending. */
 export function notebookFileName(title: string): string {
-  const slug = refFromName(title, new Set()).slice(0, 60);
+  const slug = refFromName(title, new Set(), 80);
   return `${slug === 'ref' ? 'notebook' : slug}.upwell.json`;
 }
 

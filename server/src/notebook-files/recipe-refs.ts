@@ -146,7 +146,7 @@ export function keyFromFile(key: string, ids: RefTables): string {
 }
 
 /** A short readable ref from a name ("DIC inventory 0–100 m" → "dic-inventory-0-100-m"), unique among `taken`. */
-export function refFromName(name: string, taken: Set<string>): string {
+export function refFromName(name: string, taken: Set<string>, maxLength = 32): string {
   const base =
     name
       .normalize('NFKD')
@@ -154,7 +154,8 @@ export function refFromName(name: string, taken: Set<string>): string {
       .toLowerCase()
       .replace(/[^a-z0-9]+/g, '-')
       .replace(/^-+|-+$/g, '')
-      .slice(0, 32) || 'ref';
+      .slice(0, maxLength)
+      .replace(/-+$/, '') || 'ref';
   let ref = base;
   for (let n = 2; taken.has(ref); n++) ref = `${base}-${n}`;
   taken.add(ref);
