@@ -12,3 +12,4 @@ export { compositeSpec } from './specs/composite';
 export { budgetSpec } from './specs/budget';
 export { hovmollerSpec } from './specs/hovmoller';
 export { scatterSpec } from './specs/scatter';
+export * from './canonical-json';
