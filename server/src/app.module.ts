@@ -22,6 +22,8 @@ import { CollaborationModule } from './collaboration/collaboration.module';
 import { CheckpointsModule } from './checkpoints/checkpoints.module';
 import { CommentsModule } from './comments/comments.module';
 import { NotificationsModule } from './notifications/notifications.module';
+import { EventEmitterModule } from '@nestjs/event-emitter';
+import { SnapshotsModule } from './snapshots/snapshots.module';
 // Notebook files and the demo (issue 8)
 import { NotebookFilesModule } from './notebook-files/notebook-files.module';
 import { DemoModule } from './demo/demo.module';
@@ -57,6 +59,9 @@ export class AppModule {
         CheckpointsModule,
         CommentsModule,
         NotificationsModule,
+        // Snapshots (and the in-process events they emit)
+        EventEmitterModule.forRoot(),
+        SnapshotsModule,
         NotebookFilesModule,
         DemoModule,
       ],

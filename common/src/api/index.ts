@@ -12,6 +12,7 @@ export * from './documents';
 export * from './checkpoints';
 export * from './comments';
 export * from './notifications';
+export * from './snapshots';
 // Notebook files and the demo (issue 8)
 export * from './notebook-file';
 export * from './demo';

@@ -1,19 +1,16 @@
 import { Button, Flex, Spinner, Text } from '@radix-ui/themes';
 import { useEffect, useId, useMemo, useRef, useState } from 'react';
-import { FIGURE_KIND_LABELS, figureRecipeSchema, type FigureKind, type FigureResult, type ParsedFigureRecipe } from '@upwell/common';
+import { FIGURE_KIND_LABELS, figureRecipeSchema, type FigureKind, type FigureResult, type ParsedFigureRecipe, readFigureData, formatVersionsUsed, specForResult } from '@upwell/common';
 import { useFigure } from '../api/figures';
 import { useSeriesList } from '../api/series';
 import { LazyVegaFigure } from '../charts/LazyVegaFigure';
 import { ErrorNote } from '../components/ErrorNote';
 import { EventTable } from './EventTable';
-import { readFigureData } from './figure-data';
 import { FigureExports } from './FigureExports';
 import { exportName } from './exports';
-import { formatVersionsUsed } from './format';
 import { RecipeForm } from './RecipeForm';
 import { useFigureEditors } from './use-figure-editors';
 import { useNotebookEditor } from '../editor/notebook-context';
-import { specForResult } from './specs';
 
 /** Props of a live figure as the document holds it. */
 export interface FigureViewProps {
