@@ -116,6 +116,20 @@ describe('demo seed', () => {
     }
   });
 
+  it('publishes a snapshot of the event analysis from release 1, so comparing it with the live notebook shows release 2', async () => {
+    const analysis = seen.notebooks.find((n) => n.title.startsWith('Carbon'))!;
+    const reader = await signIn(first.url, DEMO_PEOPLE[3].email, DEMO_PEOPLE[3].password);
+    const { snapshots } = (await request(first.url).get(`/api/notebooks/${analysis.id}/snapshots`).set(reader).expect(200)).body as { snapshots: { id: string; number: number; publishedBy: { email: string } }[] };
+    expect(snapshots.map((x) => [x.number, x.publishedBy.email])).toEqual([[1, DEMO_PEOPLE[0].email]]);
+    const snapshot = (await request(first.url).get(`/api/snapshots/${snapshots[0].id}`).set(reader).expect(200)).body;
+    expect(snapshot.figures.filter((f: { error: string | null }) => f.error !== null)).toEqual([]);
+    const flux = seen.series.items.find((x) => x.name === 'Air–sea CO2 flux 0–100 m')!;
+    const frozenFluxVersions = snapshot.figures.flatMap((f: { result: { used: { seriesId: string; version: number }[] } | null }) => f.result?.used ?? []).filter((u: { seriesId: string }) => u.seriesId === flux.id).map((u: { version: number }) => u.version);
+    expect(new Set(frozenFluxVersions)).toEqual(new Set([1]));
+    const compare = (await request(first.url).get(`/api/snapshots/${snapshots[0].id}/compare?with=live`).set(reader).expect(200)).body;
+    expect(compare.figures.filter((f: { status: string }) => f.status === 'changed').length).toBeGreaterThan(0);
+  });
+
   it('creates nothing new when the app starts again on the same database', async () => {
     await first.app.close();
     first = await startOn(dataDir, 'true');

@@ -74,7 +74,7 @@ export async function seedDemoContent(ctx: SeedContext): Promise<void> {
   ctx.log(`example notebooks imported: ${notebooks.map((n) => `“${n.title}”`).join(', ')}`);
 
   const snapshot = await publishDemoSnapshot(ctx.moduleRef, lead, notebooks[0].id);
-  ctx.log(snapshot ? `snapshot ${snapshot} of “${notebooks[0].title}” published` : 'snapshots are not part of this build; no demo snapshot');
+  ctx.log(`snapshot ${snapshot} of “${notebooks[0].title}” published`);
 
   // Release 2 revises the model output after the snapshot, so live figures and the snapshot differ.
   const release2 = await demoRelease(join(ctx.dataDir, 'demo', 'release-2'), 2);
