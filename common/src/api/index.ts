@@ -12,3 +12,4 @@ export * from './documents';
 export * from './checkpoints';
 export * from './comments';
 export * from './notifications';
+export * from './snapshots';
