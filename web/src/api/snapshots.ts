@@ -4,14 +4,12 @@ import { downloadFile } from './download';
 import type {
   CreateShareLinkRequest,
   PublishSnapshotRequest,
-  ShareLink,
   ShareLinkCreated,
-  Snapshot,
+  ShareLinkList,
   SnapshotComparison,
-  SnapshotSummary,
-} from './snapshot-types';
-
-export type * from './snapshot-types';
+  SnapshotList,
+  SnapshotView,
+} from '@upwell/common';
 
 /** Query keys of snapshots. A snapshot never changes, so its own entries never go stale. */
 export const snapshotKeys = {
@@ -26,7 +24,7 @@ export const snapshotKeys = {
 export function useSnapshots(notebookId: string) {
   return useQuery({
     queryKey: snapshotKeys.list(notebookId),
-    queryFn: ({ signal }) => api<{ snapshots: SnapshotSummary[] }>(`/notebooks/${notebookId}/snapshots`, { signal }),
+    queryFn: ({ signal }) => api<SnapshotList>(`/notebooks/${notebookId}/snapshots`, { signal }),
     select: (d) => d.snapshots,
   });
 }
@@ -35,7 +33,7 @@ export function useSnapshots(notebookId: string) {
 export function useSnapshot(snapshotId: string) {
   return useQuery({
     queryKey: snapshotKeys.detail(snapshotId),
-    queryFn: ({ signal }) => api<Snapshot>(`/snapshots/${snapshotId}`, { signal }),
+    queryFn: ({ signal }) => api<SnapshotView>(`/snapshots/${snapshotId}`, { signal }),
     staleTime: Infinity,
   });
 }
@@ -44,7 +42,7 @@ export function useSnapshot(snapshotId: string) {
 export function useSharedSnapshot(token: string) {
   return useQuery({
     queryKey: snapshotKeys.shared(token),
-    queryFn: ({ signal }) => api<Snapshot>(`/shared/${encodeURIComponent(token)}`, { signal }),
+    queryFn: ({ signal }) => api<SnapshotView>(`/shared/${encodeURIComponent(token)}`, { signal }),
     // A link's answer is final for this visit; asking again cannot turn 404 or 410 into a snapshot.
     retry: false,
   });
@@ -54,7 +52,7 @@ export function useSharedSnapshot(token: string) {
 export function usePublishSnapshot(notebookId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (body: PublishSnapshotRequest) => api<Snapshot>(`/notebooks/${notebookId}/snapshots`, { method: 'POST', body }),
+    mutationFn: (body: PublishSnapshotRequest) => api<SnapshotView>(`/notebooks/${notebookId}/snapshots`, { method: 'POST', body }),
     onSuccess: (snapshot) => {
       qc.setQueryData(snapshotKeys.detail(snapshot.id), snapshot);
       return qc.invalidateQueries({ queryKey: snapshotKeys.list(notebookId) });
@@ -69,7 +67,7 @@ export function useShareLinks(snapshotId: string, options: { enabled?: boolean }
   return {
     list: useQuery({
       queryKey: key,
-      queryFn: ({ signal }) => api<{ links: ShareLink[] }>(`/snapshots/${snapshotId}/share-links`, { signal }),
+      queryFn: ({ signal }) => api<ShareLinkList>(`/snapshots/${snapshotId}/share-links`, { signal }),
       select: (d) => d.links,
       enabled: options.enabled ?? true,
     }),

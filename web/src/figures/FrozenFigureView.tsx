@@ -11,7 +11,7 @@ import { specForResult } from './specs';
 export interface FrozenFigureData {
   ordinal: number;
   caption: string;
-  recipe: Record<string, unknown>;
+  recipe: Record<string, unknown> | null;
   result: FigureResult | null;
   error: string | null;
 }
@@ -46,8 +46,8 @@ function Provenance({ used, recipe }: { used: UsedSeries[]; recipe: Record<strin
  * the chart, caption, methods note with cautions, provenance and exports.
  */
 export function FrozenFigureView({ figure }: { figure: FrozenFigureData }) {
-  const parsed = useMemo(() => figureRecipeSchema.safeParse(figure.recipe), [figure.recipe]);
-  const recipe = parsed.success ? parsed.data : null;
+  const parsed = useMemo(() => (figure.recipe ? figureRecipeSchema.safeParse(figure.recipe) : null), [figure.recipe]);
+  const recipe = parsed?.success ? parsed.data : null;
   const label = `Figure ${figure.ordinal}`;
   const kindLabel = recipe ? FIGURE_KIND_LABELS[recipe.kind as FigureKind] : null;
   const spec = useMemo(() => (recipe && figure.result ? specForResult(recipe, figure.result) : null), [recipe, figure.result]);
@@ -77,7 +77,7 @@ export function FrozenFigureView({ figure }: { figure: FrozenFigureData }) {
         <strong>{label}.</strong> {figure.caption ? <span className="upwell-caption-text">{figure.caption}</span> : <span className="upwell-caption-text upwell-muted">No caption.</span>}
       </figcaption>
       {figure.result && <MethodsNote result={figure.result} />}
-      {figure.result && <Provenance used={figure.result.used} recipe={figure.recipe} />}
+      {figure.result && <Provenance used={figure.result.used} recipe={figure.recipe ?? {}} />}
       {recipe && figure.result && <FigureExports kind={recipe.kind} result={figure.result} spec={spec} baseName={exportName(figure.ordinal, kindLabel ?? 'figure')} />}
     </figure>
   );
