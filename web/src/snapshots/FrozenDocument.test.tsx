@@ -110,7 +110,7 @@ describe('FrozenDocument', () => {
     const w = window as unknown as { __pwned?: number };
     delete w.__pwned;
     const doc = {
-      type: 'doc',
+      type: 'doc' as const,
       content: [
         paragraph(text('<script>window.__pwned = 1</script>')),
         paragraph(text('<img src=x onerror="window.__pwned = 2">')),
