@@ -4,3 +4,4 @@ export * from './collab';
 export * from './engine';
 export * from './time';
 export * from './editor';
+export * from './figures';

@@ -1,7 +1,6 @@
 import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { useCallback, useEffect, useState } from 'react';
-import { SOCKET_EVENTS, type FigureRecipe, type FigureResult, type SeriesVersionCreatedEvent } from '@upwell/common';
-import { canonicalJSON } from '../figures/canonical-json';
+import { SOCKET_EVENTS, type FigureRecipe, type FigureResult, type SeriesVersionCreatedEvent, canonicalJSON } from '@upwell/common';
 import { followsLatest } from '../figures/recipe-bindings';
 import { useSocketEvent } from '../realtime/socket';
 import { api } from './client';

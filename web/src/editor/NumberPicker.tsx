@@ -1,10 +1,8 @@
 import { Button, Dialog, Flex, Spinner, Text } from '@radix-ui/themes';
 import { useQueries } from '@tanstack/react-query';
 import { useId, useState } from 'react';
-import { FIGURE_KIND_LABELS, figureRecipeSchema, type FigureKind } from '@upwell/common';
+import { FIGURE_KIND_LABELS, figureRecipeSchema, type FigureKind, formatLiveNumber, canonicalJSON } from '@upwell/common';
 import { figureQueryOptions } from '../api/figures';
-import { canonicalJSON } from '../figures/canonical-json';
-import { formatLiveNumber } from '../figures/format';
 import type { LiveNumberChoice } from './commands';
 import { shortcutLabel } from './commands';
 import { useFigureEntries, useNotebookEditor } from './notebook-context';

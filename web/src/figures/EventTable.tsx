@@ -1,10 +1,9 @@
-import type { EventTableData } from './figure-data';
-import { formatValue } from './format';
+import { formatValue, type EventTablePlotData } from '@upwell/common';
 
 const cell = (v: number | null, p: number) => (v === null ? '—' : formatValue(v, p));
 
 /** The event table as an HTML table (reads and prints as text, copies into a manuscript). */
-export function EventTable({ data, label }: { data: EventTableData; label: string }) {
+export function EventTable({ data, label }: { data: EventTablePlotData; label: string }) {
   const carbon = data.events[0]?.carbon ?? [];
   if (data.events.length === 0) {
     return <p className="upwell-figure-empty">No events met the rule in this period. Try a lower threshold or a shorter minimum duration.</p>;

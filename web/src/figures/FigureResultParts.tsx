@@ -1,10 +1,7 @@
 import { useMemo } from 'react';
-import type { FigureResult, ParsedFigureRecipe } from '@upwell/common';
+import { formatVersionsUsed, readFigureData, specForResult, type FigureResult, type ParsedFigureRecipe } from '@upwell/common';
 import { LazyVegaFigure } from '../charts/LazyVegaFigure';
 import { EventTable } from './EventTable';
-import { readFigureData } from './figure-data';
-import { formatVersionsUsed } from './format';
-import { specForResult } from './specs';
 
 /** The methods note: the server's sentence, then the data versions it used (live and frozen figures alike). */
 export function MethodsNote({ result }: { result: FigureResult }) {

@@ -1,6 +1,6 @@
 import { Button, Flex, Spinner, Text } from '@radix-ui/themes';
 import { useEffect, useId, useMemo, useRef, useState } from 'react';
-import { FIGURE_KIND_LABELS, figureRecipeSchema, type FigureKind, type ParsedFigureRecipe } from '@upwell/common';
+import { FIGURE_KIND_LABELS, figureRecipeSchema, type FigureKind, type ParsedFigureRecipe, specForResult } from '@upwell/common';
 import { useFigure } from '../api/figures';
 import { useSeriesList } from '../api/series';
 import { ErrorNote } from '../components/ErrorNote';
@@ -10,7 +10,6 @@ import { FigureChart, MethodsNote } from './FigureResultParts';
 import { RecipeForm } from './RecipeForm';
 import { useFigureEditors } from './use-figure-editors';
 import { useNotebookEditor } from '../editor/notebook-context';
-import { specForResult } from './specs';
 
 /** Props of a live figure as the document holds it. */
 export interface FigureViewProps {

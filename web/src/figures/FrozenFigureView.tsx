@@ -1,11 +1,10 @@
 import { Flex, Text } from '@radix-ui/themes';
 import { useMemo } from 'react';
-import { FIGURE_KIND_LABELS, figureRecipeSchema, type FigureKind, type FigureResult, type UsedSeries } from '@upwell/common';
+import { FIGURE_KIND_LABELS, figureRecipeSchema, specForResult, type FigureKind, type FigureResult, type UsedSeries } from '@upwell/common';
 import { recipeParameters, shaPrefix } from '../snapshots/provenance';
 import { exportName } from './exports';
 import { FigureExports } from './FigureExports';
 import { FigureChart, MethodsNote } from './FigureResultParts';
-import { specForResult } from './specs';
 
 /** A figure as a snapshot froze it: the recipe with versions resolved, and the result computed at publication. */
 export interface FrozenFigureData {

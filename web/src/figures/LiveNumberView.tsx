@@ -1,7 +1,6 @@
 import { useId, useMemo, useState } from 'react';
-import { FIGURE_KIND_LABELS, figureRecipeSchema, type FigureKind } from '@upwell/common';
+import { FIGURE_KIND_LABELS, figureRecipeSchema, type FigureKind, formatLiveNumber, formatVersionsUsed } from '@upwell/common';
 import { useFigure } from '../api/figures';
-import { formatLiveNumber, formatVersionsUsed } from './format';
 
 /** Attributes of a live number as the document holds them. */
 export interface LiveNumberViewProps {

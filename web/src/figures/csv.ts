@@ -1,5 +1,5 @@
 import type { FigureKind, FigureResult } from '@upwell/common';
-import { readFigureData } from './figure-data';
+import { readFigureData } from '@upwell/common';
 
 type Cell = string | number | null | undefined;
 

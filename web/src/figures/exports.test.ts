@@ -1,13 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { compile } from 'vega-lite';
 import { figureSvg, exportName } from './exports';
-import { budgetSpec } from './specs/budget';
-import { compositeSpec } from './specs/composite';
-import { hovmollerSpec } from './specs/hovmoller';
-import { lagCorrelationSpec } from './specs/lag-correlation';
-import { scatterSpec } from './specs/scatter';
-import { seasonalCycleSpec } from './specs/seasonal-cycle';
-import { timeseriesSpec } from './specs/timeseries';
+import { budgetSpec, compositeSpec, hovmollerSpec, lagCorrelationSpec, scatterSpec, seasonalCycleSpec, timeseriesSpec } from '@upwell/common';
 
 const specs = {
   timeseries: timeseriesSpec({

@@ -1,7 +1,5 @@
-import type { UsedSeries } from '@upwell/common';
+import { MINUS, type UsedSeries } from '@upwell/common';
 
-/** The minus sign typeset in journals (U+2212). */
-const MINUS = '\u2212';
 const plain = new Intl.NumberFormat('en-US', { maximumSignificantDigits: 4 });
 
 /** A compared value: four significant digits, true minus sign, units after a space; "—" when there is none. */

@@ -1,11 +1,11 @@
-import type { FigureRecipe } from '@upwell/common';
-import type { VisualizationSpec } from 'vega-embed';
-import type { ScatterData } from '../figure-data';
+import type { FigureRecipe } from '../../api/figures';
+import type { FigureSpec } from './spec-type';
+import type { ScatterPlotData } from '../figure-data';
 import { formatValue } from '../format';
 import { ACCENT, axisTitle, BASE_CONFIG, INK, SCHEMA } from './common';
 
 /** Index against carbon anomaly, one point per month, with the least-squares line and r² in the title. */
-export function scatterSpec(data: ScatterData, recipe?: FigureRecipe): VisualizationSpec {
+export function scatterSpec(data: ScatterPlotData, recipe?: FigureRecipe): FigureSpec {
   const lag = recipe && 'lag' in recipe && recipe.lag !== undefined ? recipe.lag : 0;
   const points = data.points.filter((p) => p.x !== null && p.y !== null);
   const xs = points.map((p) => p.x as number);
@@ -39,5 +39,5 @@ export function scatterSpec(data: ScatterData, recipe?: FigureRecipe): Visualiza
     layer: layers,
     title: { text: title, subtitle: `Least-squares line; ${lagText}` },
     config: BASE_CONFIG,
-  } as VisualizationSpec;
+  } as FigureSpec;
 }

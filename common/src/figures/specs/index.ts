@@ -1,5 +1,5 @@
-import type { FigureRecipe, FigureResult } from '@upwell/common';
-import type { VisualizationSpec } from 'vega-embed';
+import type { FigureRecipe, FigureResult } from '../../api/figures';
+import type { FigureSpec } from './spec-type';
 import { readFigureData } from '../figure-data';
 import { budgetSpec } from './budget';
 import { compositeSpec } from './composite';
@@ -10,7 +10,7 @@ import { seasonalCycleSpec } from './seasonal-cycle';
 import { timeseriesSpec } from './timeseries';
 
 /** The chart of a computed recipe; null for the event table, which is an HTML table. */
-export function specForResult(recipe: FigureRecipe, result: Pick<FigureResult, 'data' | 'used'>): VisualizationSpec | null {
+export function specForResult(recipe: FigureRecipe, result: Pick<FigureResult, 'data' | 'used'>): FigureSpec | null {
   switch (recipe.kind) {
     case 'timeseries':
       return timeseriesSpec(readFigureData('timeseries', result), recipe);

@@ -1,10 +1,10 @@
-import type { FigureRecipe } from '@upwell/common';
-import type { VisualizationSpec } from 'vega-embed';
-import type { HovmollerData } from '../figure-data';
+import type { FigureRecipe } from '../../api/figures';
+import type { FigureSpec } from './spec-type';
+import type { HovmollerPlotData } from '../figure-data';
 import { axisTitle, BASE_CONFIG, monthAfter, monthStart, SCHEMA } from './common';
 
 /** The spacing of latitude bands (the smallest gap between distinct latitudes). */
-function latStep(cells: HovmollerData['cells']): number {
+function latStep(cells: HovmollerPlotData['cells']): number {
   const lats = [...new Set(cells.map((c) => c.lat))].sort((a, b) => a - b);
   let step = Infinity;
   for (let i = 1; i < lats.length; i++) step = Math.min(step, lats[i] - lats[i - 1]);
@@ -12,7 +12,7 @@ function latStep(cells: HovmollerData['cells']): number {
 }
 
 /** A time–latitude diagram: one cell per month and latitude band, diverging colours centred on zero (red above, blue below). */
-export function hovmollerSpec(data: HovmollerData, recipe?: FigureRecipe): VisualizationSpec {
+export function hovmollerSpec(data: HovmollerPlotData, recipe?: FigureRecipe): FigureSpec {
   const half = latStep(data.cells) / 2;
   const values = data.cells.map((c) => ({ ...c, from: monthStart(c.month), to: monthAfter(c.month), south: c.lat - half, north: c.lat + half }));
   const show = recipe && 'show' in recipe ? recipe.show : 'anomaly';
@@ -35,5 +35,5 @@ export function hovmollerSpec(data: HovmollerData, recipe?: FigureRecipe): Visua
       },
     },
     config: BASE_CONFIG,
-  } as VisualizationSpec;
+  } as FigureSpec;
 }

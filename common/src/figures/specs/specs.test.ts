@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { BUDGET_COLOURS } from '../budget-colours';
 import { NO_UNITS, readFigureData } from '../figure-data';
-import { result, used } from '../test-data';
+import { result, used } from '../../../test-fixtures/figure-results';
 import { budgetSpec } from './budget';
 import { COLD, WARM } from './common';
 import { compositeSpec } from './composite';

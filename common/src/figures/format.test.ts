@@ -1,8 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { budgetColour, BUDGET_COLOURS, canonicalTerm } from './budget-colours';
-import { canonicalJSON } from './canonical-json';
 import { formatLiveNumber, formatValue, formatVersionsUsed, MINUS } from './format';
-import { used } from './test-data';
+import { used } from '../../test-fixtures/figure-results';
 
 describe('formatLiveNumber', () => {
   it('prints the value at its precision with a true minus sign (U+2212) and its units', () => {
@@ -39,25 +37,5 @@ describe('formatVersionsUsed', () => {
   it('names each series with its version and says when it is model output', () => {
     expect(formatVersionsUsed([used(), used({ name: 'Index', version: 5, origin: 'observation' })])).toBe('DIC 0–100 m v3 (model output), Index v5');
     expect(formatVersionsUsed([])).toBe('no stored series');
-  });
-});
-
-describe('budget colours', () => {
-  it('gives each canonical term its fixed colour whatever the spelling', () => {
-    expect(canonicalTerm('Air-sea flux')).toBe('air–sea flux');
-    expect(budgetColour('Air-sea flux')).toBe(BUDGET_COLOURS['air–sea flux']);
-    expect(budgetColour(' Biology ')).toBe(BUDGET_COLOURS.biology);
-  });
-
-  it('keeps one colour for a term of another name, distinct from the canonical ones', () => {
-    expect(budgetColour('entrainment')).toBe(budgetColour('Entrainment'));
-    expect(Object.values(BUDGET_COLOURS)).not.toContain(budgetColour('entrainment'));
-  });
-});
-
-describe('canonicalJSON', () => {
-  it('gives the same text for the same recipe whatever the key order', () => {
-    expect(canonicalJSON({ b: 1, a: { d: [1, { z: 1, y: 2 }], c: 2 } })).toBe(canonicalJSON({ a: { c: 2, d: [1, { y: 2, z: 1 }] }, b: 1 }));
-    expect(canonicalJSON({ a: 1, b: undefined })).toBe('{"a":1}');
   });
 });

@@ -1,4 +1,4 @@
-import type { UsedSeries } from '@upwell/common';
+import type { UsedSeries } from '../api/figures';
 
 /** The minus sign typeset in journals (U+2212), not the hyphen. */
 export const MINUS = '\u2212';

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { BudgetData, CompositeData, EventTableData, FigureResult } from '@upwell/common';
+import type { BudgetData, CompositeData, EventTableData, FigureResult } from '../api/figures';
 import { readFigureData } from './figure-data';
 
 const used: FigureResult['used'] = [

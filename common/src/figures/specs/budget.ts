@@ -1,7 +1,7 @@
-import type { FigureRecipe } from '@upwell/common';
-import type { VisualizationSpec } from 'vega-embed';
+import type { FigureRecipe } from '../../api/figures';
+import type { FigureSpec } from './spec-type';
 import { budgetColour } from '../budget-colours';
-import type { BudgetData } from '../figure-data';
+import type { BudgetPlotData } from '../figure-data';
 import { formatValue } from '../format';
 import { axisTitle, BASE_CONFIG, monthStart, SCHEMA } from './common';
 
@@ -10,7 +10,7 @@ import { axisTitle, BASE_CONFIG, monthStart, SCHEMA } from './common';
  * line over them, the residual (tendency − sum of terms) as a dashed line.
  * Every term keeps its colour from budget-colours, named in the legend.
  */
-export function budgetSpec(data: BudgetData, _recipe?: FigureRecipe): VisualizationSpec {
+export function budgetSpec(data: BudgetPlotData, _recipe?: FigureRecipe): FigureSpec {
   const termValues = data.terms.flatMap((t) => data.months.map((m, i) => ({ month: monthStart(m), term: t.name, value: t.values[i] ?? null })));
   const lines = data.months.flatMap((m, i) => [
     { month: monthStart(m), term: 'tendency', value: data.tendency[i] ?? null },
@@ -47,5 +47,5 @@ export function budgetSpec(data: BudgetData, _recipe?: FigureRecipe): Visualizat
     ],
     title: { text: `Terms stacked (bars), tendency (solid), residual (dashed); RMS residual ${rms} ${data.units}${rel}`, fontSize: 11 },
     config: BASE_CONFIG,
-  } as VisualizationSpec;
+  } as FigureSpec;
 }

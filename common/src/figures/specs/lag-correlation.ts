@@ -1,6 +1,6 @@
-import type { FigureRecipe } from '@upwell/common';
-import type { VisualizationSpec } from 'vega-embed';
-import type { LagCorrelationData } from '../figure-data';
+import type { FigureRecipe } from '../../api/figures';
+import type { FigureSpec } from './spec-type';
+import type { LagCorrelationPlotData } from '../figure-data';
 import { formatValue } from '../format';
 import { ACCENT, BASE_CONFIG, MUTED, SCHEMA, WARM } from './common';
 
@@ -9,7 +9,7 @@ import { ACCENT, BASE_CONFIG, MUTED, SCHEMA, WARM } from './common';
  * rules at ±threshold for every lag (it varies with the effective sample
  * size), and the strongest lag marked and labelled.
  */
-export function lagCorrelationSpec(data: LagCorrelationData, recipe?: FigureRecipe): VisualizationSpec {
+export function lagCorrelationSpec(data: LagCorrelationPlotData, recipe?: FigureRecipe): FigureSpec {
   const method = data.method ?? (recipe && 'method' in recipe ? recipe.method : undefined) ?? 'pearson';
   const alpha = recipe && 'alpha' in recipe && recipe.alpha !== undefined ? recipe.alpha : 0.05;
   const values = data.lags.map((l) => ({
@@ -70,5 +70,5 @@ export function lagCorrelationSpec(data: LagCorrelationData, recipe?: FigureReci
     layer: layers,
     title: { text: `Dashed red rules: ±threshold for p = ${alpha} (effective sample size)`, fontSize: 11 },
     config: BASE_CONFIG,
-  } as VisualizationSpec;
+  } as FigureSpec;
 }

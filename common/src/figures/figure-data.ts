@@ -5,10 +5,10 @@ import type {
   FigureKind,
   FigureResult,
   UsedSeries,
-} from '@upwell/common';
+} from '../api/figures';
 
 /**
- * Plot-ready data of each recipe kind, as this client expects the figure
+ * Plot-ready data of each recipe kind, as the figures' spec builders (web and server) read it from the figure
  * route to send it in `FigureResult.data`. Months are "YYYY-MM"; a missing
  * value is null. This file is the one place to adapt when the server's
  * shapes are settled.
@@ -23,7 +23,7 @@ export interface EventSpan {
   end: string;
 }
 
-export interface TimeseriesData {
+export interface TimeseriesPlotData {
   points: { month: string; value: number | null }[];
   events: EventSpan[];
   units: string;
@@ -32,20 +32,20 @@ export interface TimeseriesData {
   name?: string;
 }
 
-export interface SeasonalCycleData {
+export interface SeasonalCyclePlotData {
   months: { month: number; mean: number | null; sd: number | null; min: number | null; max: number | null; n: number }[];
   units: string;
   name?: string;
 }
 
-export interface LagCorrelationData {
+export interface LagCorrelationPlotData {
   /** Positive lag: the index leads the series by that many months. */
   lags: { lag: number; r: number | null; n: number; nEff: number | null; p: number | null; threshold: number | null }[];
   strongest: { lag: number; r: number; p: number | null } | null;
   method?: 'pearson' | 'spearman';
 }
 
-export interface CompositeData {
+export interface CompositePlotData {
   /** Months from the event peak, one per position of mean/lower/upper/n. */
   offsets: number[];
   mean: (number | null)[];
@@ -58,7 +58,7 @@ export interface CompositeData {
   phase?: Phase;
 }
 
-export interface EventTableData {
+export interface EventTablePlotData {
   events: (EventSpan & {
     months: number;
     peakValue: number | null;
@@ -68,7 +68,7 @@ export interface EventTableData {
   indexUnits?: string;
 }
 
-export interface BudgetData {
+export interface BudgetPlotData {
   months: string[];
   terms: { name: string; values: (number | null)[] }[];
   tendency: (number | null)[];
@@ -78,12 +78,12 @@ export interface BudgetData {
   units: string;
 }
 
-export interface HovmollerData {
+export interface HovmollerPlotData {
   cells: { month: string; lat: number; value: number | null }[];
   units: string;
 }
 
-export interface ScatterData {
+export interface ScatterPlotData {
   points: { x: number | null; y: number | null; month: string }[];
   fit: { slope: number; intercept: number; r2: number; n: number } | null;
   xUnits: string;
@@ -94,14 +94,14 @@ export interface ScatterData {
 
 /** Data type of each kind. */
 export interface FigureDataByKind {
-  timeseries: TimeseriesData;
-  'seasonal-cycle': SeasonalCycleData;
-  'lag-correlation': LagCorrelationData;
-  composite: CompositeData;
-  'event-table': EventTableData;
-  budget: BudgetData;
-  hovmoller: HovmollerData;
-  scatter: ScatterData;
+  timeseries: TimeseriesPlotData;
+  'seasonal-cycle': SeasonalCyclePlotData;
+  'lag-correlation': LagCorrelationPlotData;
+  composite: CompositePlotData;
+  'event-table': EventTablePlotData;
+  budget: BudgetPlotData;
+  hovmoller: HovmollerPlotData;
+  scatter: ScatterPlotData;
 }
 
 /** What to call an axis when the server gave no units: say so rather than print a bare number. */

@@ -1,12 +1,12 @@
-import type { FigureRecipe } from '@upwell/common';
-import type { VisualizationSpec } from 'vega-embed';
-import type { SeasonalCycleData } from '../figure-data';
+import type { FigureRecipe } from '../../api/figures';
+import type { FigureSpec } from './spec-type';
+import type { SeasonalCyclePlotData } from '../figure-data';
 import { ACCENT, axisTitle, BASE_CONFIG, SCHEMA } from './common';
 
 const MONTH_NAMES = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
 
 /** The mean annual cycle over the base period: mean line, ±1 sd band, and the range as whiskers. */
-export function seasonalCycleSpec(data: SeasonalCycleData, _recipe?: FigureRecipe): VisualizationSpec {
+export function seasonalCycleSpec(data: SeasonalCyclePlotData, _recipe?: FigureRecipe): FigureSpec {
   const values = data.months.map((m) => ({
     ...m,
     name: MONTH_NAMES[m.month - 1],
@@ -30,5 +30,5 @@ export function seasonalCycleSpec(data: SeasonalCycleData, _recipe?: FigureRecip
     ],
     title: { text: 'Mean ± 1 standard deviation (bars); whiskers show the lowest and highest month', fontSize: 11 },
     config: BASE_CONFIG,
-  } as VisualizationSpec;
+  } as FigureSpec;
 }

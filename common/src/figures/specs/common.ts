@@ -1,4 +1,4 @@
-import { formatMonth, parseMonth } from '@upwell/common';
+import { formatMonth, parseMonth } from '../../series/month';
 import type { EventSpan } from '../figure-data';
 import { NO_UNITS } from '../figure-data';
 

@@ -1,10 +1,10 @@
-import type { FigureRecipe } from '@upwell/common';
-import type { VisualizationSpec } from 'vega-embed';
-import type { CompositeData } from '../figure-data';
+import type { FigureRecipe } from '../../api/figures';
+import type { FigureSpec } from './spec-type';
+import type { CompositePlotData } from '../figure-data';
 import { axisTitle, BASE_CONFIG, COLD, SCHEMA, WARM } from './common';
 
 /** An event composite: each event as a thin grey line, the confidence band, and the mean on top. */
-export function compositeSpec(data: CompositeData, recipe?: FigureRecipe): VisualizationSpec {
+export function compositeSpec(data: CompositePlotData, recipe?: FigureRecipe): FigureSpec {
   const phase = data.phase ?? (recipe && 'phase' in recipe ? recipe.phase : undefined) ?? 'warm';
   const confidence = recipe && 'confidence' in recipe && recipe.confidence !== undefined ? recipe.confidence : 0.95;
   const colour = phase === 'cold' ? COLD : WARM;
@@ -40,5 +40,5 @@ export function compositeSpec(data: CompositeData, recipe?: FigureRecipe): Visua
       fontSize: 11,
     },
     config: BASE_CONFIG,
-  } as VisualizationSpec;
+  } as FigureSpec;
 }

@@ -1,10 +1,10 @@
-import type { FigureRecipe } from '@upwell/common';
-import type { VisualizationSpec } from 'vega-embed';
-import type { TimeseriesData } from '../figure-data';
+import type { FigureRecipe } from '../../api/figures';
+import type { FigureSpec } from './spec-type';
+import type { TimeseriesPlotData } from '../figure-data';
 import { axisTitle, BASE_CONFIG, eventLayers, INK, monthStart, SCHEMA } from './common';
 
 /** A series over time (raw or anomaly) with warm and cold events shaded behind it. */
-export function timeseriesSpec(data: TimeseriesData, _recipe?: FigureRecipe): VisualizationSpec {
+export function timeseriesSpec(data: TimeseriesPlotData, _recipe?: FigureRecipe): FigureSpec {
   const anomaly = data.show === 'anomaly';
   const label = `${data.name ?? 'Series'}${anomaly ? ' anomaly' : ''}`;
   const points = data.points.map((p) => ({ month: monthStart(p.month), value: p.value }));
@@ -18,5 +18,5 @@ export function timeseriesSpec(data: TimeseriesData, _recipe?: FigureRecipe): Vi
       y: { field: 'value', type: 'quantitative', title: axisTitle(label, data.units), scale: { zero: false } },
     },
   });
-  return { $schema: SCHEMA, width: 'container', height: 260, layer: layers, config: BASE_CONFIG } as VisualizationSpec;
+  return { $schema: SCHEMA, width: 'container', height: 260, layer: layers, config: BASE_CONFIG } as FigureSpec;
 }
