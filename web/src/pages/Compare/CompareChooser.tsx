@@ -1,6 +1,7 @@
 import { Button, Flex, Text } from '@radix-ui/themes';
 import { useId, useState, type FormEvent } from 'react';
 import type { SnapshotSummary } from '@upwell/common';
+import './compare.css';
 
 /** Picks what to compare: a snapshot, and another snapshot of the same notebook or the live notebook. */
 export function CompareChooser({
