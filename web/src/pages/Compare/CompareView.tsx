@@ -39,7 +39,10 @@ function TextDiff({ ops }: { ops: DiffRun[] }) {
   const paragraphs = useMemo(() => diffParagraphs(ops), [ops]);
   const changed = (p: DiffRun[]) => p.some((r) => r.op !== 'equal');
   const shown = onlyChanged ? paragraphs.filter(changed) : paragraphs;
-  const words = (op: 'insert' | 'delete') => ops.filter((o) => o.op === op).reduce((n, o) => n + (o.text.match(/\S+/g)?.length ?? 0), 0);
+  const words = (op: 'insert' | 'delete') => {
+    const n = ops.filter((o) => o.op === op).reduce((sum, o) => sum + (o.text.match(/\S+/g)?.length ?? 0), 0);
+    return `${n} ${n === 1 ? 'word' : 'words'}`;
+  };
   return (
     <section aria-labelledby="compare-text-heading">
       <Heading as="h2" size="4" id="compare-text-heading" mb="2">
@@ -47,7 +50,7 @@ function TextDiff({ ops }: { ops: DiffRun[] }) {
       </Heading>
       <Flex gap="4" wrap="wrap" align="center" mb="2">
         <Text size="2" color="gray">
-          {words('insert')} words inserted, {words('delete')} words deleted. <ins className="upwell-diff-ins">Underlined</ins> text was inserted,{' '}
+          {words('insert')} inserted, {words('delete')} deleted. <ins className="upwell-diff-ins">Underlined</ins> text was inserted,{' '}
           <del className="upwell-diff-del">struck-through</del> text was deleted.
         </Text>
         <Text as="label" size="2">
