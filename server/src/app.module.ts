@@ -22,6 +22,8 @@ import { CollaborationModule } from './collaboration/collaboration.module';
 import { CheckpointsModule } from './checkpoints/checkpoints.module';
 import { CommentsModule } from './comments/comments.module';
 import { NotificationsModule } from './notifications/notifications.module';
+import { EventEmitterModule } from '@nestjs/event-emitter';
+import { SnapshotsModule } from './snapshots/snapshots.module';
 
 /** The whole server, built for one resolved configuration. */
 @Module({})
@@ -54,6 +56,9 @@ export class AppModule {
         CheckpointsModule,
         CommentsModule,
         NotificationsModule,
+        // Snapshots (and the in-process events they emit)
+        EventEmitterModule.forRoot(),
+        SnapshotsModule,
       ],
       controllers: [HealthController],
       providers: [MigrateOnStart],

@@ -11,6 +11,6 @@ import { FiguresService } from './figures.service';
   controllers: [FiguresController],
   // The cache is a provider so tests and the bench can inspect and clear it.
   providers: [FiguresService, FigureInputsService, { provide: FigureCache, useFactory: () => new FigureCache() }],
-  exports: [FigureInputsService, FigureCache],
+  exports: [FiguresService, FigureInputsService, FigureCache],
 })
 export class FiguresModule {}

@@ -4,6 +4,7 @@ import { Migration20261201190750 } from './Migration20261201190750';
 import { Migration20261201193518 } from './Migration20261201193518';
 import { Migration20261201200734 } from './Migration20261201200734';
 import { Migration20261201201010 } from './Migration20261201201010';
+import { Migration20261201214631 } from './Migration20261201214631';
 
 /**
  * Every migration, oldest first. Create one with `npm run migration:create -w server`
@@ -20,4 +21,6 @@ export const migrationsList: MigrationObject[] = [
   { name: 'Migration20261201200734', class: Migration20261201200734 },
   // Named checkpoints of notebook documents (version history).
   { name: 'Migration20261201201010', class: Migration20261201201010 },
+  // Published snapshots of notebooks (frozen payload) and their share links.
+  { name: 'Migration20261201214631', class: Migration20261201214631 },
 ];
