@@ -12,11 +12,18 @@ import SignUpPage from './pages/SignUp';
 
 // The editor (Tiptap, ProseMirror, Yjs) loads with the first notebook opened, not with the sign-in page.
 const NotebookPage = lazy(() => import('./pages/Notebook'));
+// Snapshots: the frozen pages (static renderer) and the comparison, each in its own chunk.
+const SnapshotPage = lazy(() => import('./pages/Snapshot'));
+const SharedSnapshotPage = lazy(() => import('./pages/SharedSnapshot'));
+const ComparePage = lazy(() => import('./pages/Compare'));
+const lazyPage = (page: React.ReactNode) => <Suspense fallback={<Spinner size="3" />}>{page}</Suspense>;
 
 /** Every screen of the web client. */
 export const routes = [
   { path: '/sign-in', element: <SignInPage /> },
   { path: '/sign-up', element: <SignUpPage /> },
+  // A share link opens without signing in, outside the app shell's redirect.
+  { path: '/shared/:token', element: lazyPage(<SharedSnapshotPage />) },
   {
     path: '/',
     element: <AppShell />,
@@ -31,6 +38,8 @@ export const routes = [
           </Suspense>
         ),
       },
+      { path: 'snapshots/:snapshotId', element: lazyPage(<SnapshotPage />) },
+      { path: 'notebooks/:notebookId/compare', element: lazyPage(<ComparePage />) },
       { path: 'series', element: <SeriesLibraryPage /> },
       { path: 'series/:seriesId', element: <SeriesPage /> },
       { path: 'group', element: <GroupPage /> },

@@ -1,13 +1,12 @@
 import { Button, Flex, Spinner, Text } from '@radix-ui/themes';
 import { useEffect, useId, useMemo, useRef, useState } from 'react';
-import { FIGURE_KIND_LABELS, figureRecipeSchema, type FigureKind, type FigureResult, type ParsedFigureRecipe, readFigureData, formatVersionsUsed, specForResult } from '@upwell/common';
+import { FIGURE_KIND_LABELS, figureRecipeSchema, type FigureKind, type ParsedFigureRecipe, specForResult } from '@upwell/common';
 import { useFigure } from '../api/figures';
 import { useSeriesList } from '../api/series';
-import { LazyVegaFigure } from '../charts/LazyVegaFigure';
 import { ErrorNote } from '../components/ErrorNote';
-import { EventTable } from './EventTable';
 import { FigureExports } from './FigureExports';
 import { exportName } from './exports';
+import { FigureChart, MethodsNote } from './FigureResultParts';
 import { RecipeForm } from './RecipeForm';
 import { useFigureEditors } from './use-figure-editors';
 import { useNotebookEditor } from '../editor/notebook-context';
@@ -26,34 +25,6 @@ export interface FigureViewProps {
   editable: boolean;
   onRecipeChange: (recipe: ParsedFigureRecipe) => void;
   onCaptionChange: (caption: string) => void;
-}
-
-/** The methods note: the server's sentence, then the data versions it used. */
-function MethodsNote({ result }: { result: FigureResult }) {
-  return (
-    <div className="upwell-methods">
-      <p>
-        <span className="upwell-methods-label">Methods.</span> {result.methods}
-      </p>
-      <p className="upwell-provenance">
-        <span className="upwell-methods-label">Data.</span> <span className="upwell-mono">{formatVersionsUsed(result.used)}</span>
-      </p>
-      {result.cautions.length > 0 && (
-        <ul className="upwell-cautions" aria-label="Cautions">
-          {result.cautions.map((c) => (
-            <li key={c}>Caution: {c}</li>
-          ))}
-        </ul>
-      )}
-      {result.warnings.length > 0 && (
-        <ul className="upwell-cautions" aria-label="Warnings">
-          {result.warnings.map((w) => (
-            <li key={w}>{w}</li>
-          ))}
-        </ul>
-      )}
-    </div>
-  );
 }
 
 function Caption({ label, caption, editable, onChange }: { label: string; caption: string; editable: boolean; onChange: (c: string) => void }) {
@@ -83,12 +54,6 @@ function Caption({ label, caption, editable, onChange }: { label: string; captio
       }}
     />
   );
-}
-
-function Chart({ recipe, result, label }: { recipe: ParsedFigureRecipe; result: FigureResult; label: string }) {
-  const spec = useMemo(() => specForResult(recipe, result), [recipe, result]);
-  if (recipe.kind === 'event-table') return <EventTable data={readFigureData('event-table', result)} label={label} />;
-  return spec ? <LazyVegaFigure spec={spec} label={label} /> : null;
 }
 
 /**
@@ -136,7 +101,7 @@ export function FigureView({ notebookId, groupId, figureNumber, recipe, caption,
       </Flex>
     );
   } else {
-    body = <Chart recipe={valid} result={query.data} label={`${label}: ${kindLabel}`} />;
+    body = <FigureChart recipe={valid} result={query.data} label={`${label}: ${kindLabel}`} />;
   }
 
   return (

@@ -19,6 +19,7 @@ import { EventSetsPanel } from './EventSetsPanel';
 import { NotebookSettings } from './NotebookSettings';
 import { ExportNotebookFile } from './ExportNotebookFile';
 import { SaveStatusLine } from './SaveStatus';
+import { SnapshotsPanel } from './SnapshotsPanel';
 
 /** One notebook: the manuscript with its live figures, and beneath it event sets, people and settings. */
 export default function NotebookPage() {
@@ -93,6 +94,7 @@ function NotebookWorkspace({ notebook }: { notebook: NonNullable<ReturnType<type
         <Tabs.List aria-label="About this notebook">
           <Tabs.Trigger value="events">Event sets</Tabs.Trigger>
           <Tabs.Trigger value="checkpoints">Checkpoints</Tabs.Trigger>
+          <Tabs.Trigger value="snapshots">Snapshots</Tabs.Trigger>
           <Tabs.Trigger value="people">People</Tabs.Trigger>
           <Tabs.Trigger value="settings">Notebook</Tabs.Trigger>
         </Tabs.List>
@@ -102,6 +104,9 @@ function NotebookWorkspace({ notebook }: { notebook: NonNullable<ReturnType<type
           </Tabs.Content>
           <Tabs.Content value="checkpoints">
             <CheckpointsPanel notebookId={notebook.id} editable={editable} />
+          </Tabs.Content>
+          <Tabs.Content value="snapshots">
+            <SnapshotsPanel notebookId={notebook.id} canPublish={notebook.allowed.includes('publish')} />
           </Tabs.Content>
           <Tabs.Content value="people">
             <AccessList notebook={notebook} />
