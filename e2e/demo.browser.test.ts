@@ -35,4 +35,29 @@ describe('the demo, as a newcomer walks it', () => {
     expect(errors).toEqual([]);
     await context.close();
   });
+
+  it('opens the published snapshot as the reader, figures and all, without a console error', async () => {
+    const context = await h.browser.newContext({ viewport: { width: 1300, height: 1000 } });
+    const page = await context.newPage();
+    const errors = watchErrors(page);
+    await page.goto(`${h.server.url}/sign-in`);
+    await page.getByRole('button', { name: 'Fill in as reader Sami Ojala' }).click();
+    await page.getByRole('form', { name: 'Sign in' }).getByRole('button', { name: 'Sign in' }).click();
+    await page.waitForURL('**/notebooks');
+    await page.getByRole('link', { name: EVENT_ANALYSIS }).click();
+    await page.locator('.ProseMirror').waitFor();
+    await page.getByRole('tab', { name: 'Snapshots' }).click();
+    await page.getByRole('link', { name: 'v1 — Draft for the group meeting' }).click();
+    await page.getByRole('heading', { level: 1, name: 'Snapshot v1 — Draft for the group meeting' }).waitFor({ timeout: 30_000 });
+    for (let n = 1; n <= FIGURES_IN_EVENT_ANALYSIS; n++) {
+      const figure = page.getByRole('figure', { name: `Figure ${n}`, exact: true });
+      await figure.waitFor({ timeout: 30_000 });
+    }
+    await expect.poll(async () => page.locator('[role="figure"] svg').count(), { timeout: 30_000 }).toBeGreaterThanOrEqual(FIGURES_IN_EVENT_ANALYSIS - 1);
+    // A reader may read the snapshot but not publish one.
+    expect(await page.getByRole('button', { name: 'Publish snapshot' }).count()).toBe(0);
+    await screenshot(page, 'demo-snapshot-reader');
+    expect(errors).toEqual([]);
+    await context.close();
+  });
 });
