@@ -74,6 +74,7 @@ export async function writeFieldNetcdf4(path: string, field: GriddedField, d: Fi
   }
 }
 
-function attrs(target: { create_attribute(name: string, data: string): void }, values: Record<string, string>): void {
-  for (const [name, value] of Object.entries(values)) target.create_attribute(name, value);
+/** Text attributes as fixed-length UTF-8 strings, which netCDF-C reads as classic `char` attributes. */
+function attrs(target: { create_attribute(name: string, data: string, shape: null, dtype: string): void }, values: Record<string, string>): void {
+  for (const [name, value] of Object.entries(values)) target.create_attribute(name, value, null, `S${Buffer.byteLength(value, 'utf8')}`);
 }
