@@ -42,10 +42,11 @@ describe('writeFieldNetcdf4()', () => {
     try {
       expect(f.dimensions).toEqual([
         { name: 'time', size: 14, unlimited: false },
+        { name: 'nv', size: 2, unlimited: false },
         { name: 'lat', size: 2, unlimited: false },
         { name: 'lon', size: 3, unlimited: false },
       ]);
-      expect(f.variables.map((v) => `${v.name}(${v.dims.join(',')})`)).toEqual(['time(time)', 'lat(lat)', 'lon(lon)', 'x(time,lat,lon)']);
+      expect(f.variables.map((v) => `${v.name}(${v.dims.join(',')})`)).toEqual(['time(time)', 'time_bnds(time,nv)', 'lat(lat)', 'lon(lon)', 'x(time,lat,lon)']);
       expect(Array.from(f.read('x'))).toEqual(Array.from(field.values));
       expect(Array.from(f.read('x', { start: [13, 1, 2], count: [1, 1, 1] }))).toEqual([1312]);
       expect(f.variable('x').attributes._FillValue).toBeCloseTo(NC_FILL_FLOAT, -30);
@@ -79,7 +80,9 @@ describe('writeFieldNetcdf4()', () => {
     await writeFieldNetcdf4(path, field, description);
     expect(execFileSync('ncdump', ['-k', path], { encoding: 'utf8' }).trim()).toBe('netCDF-4');
     const header = execFileSync('ncdump', ['-h', path], { encoding: 'utf8' });
-    expect(header).toMatch(/time = 14 ;\s+lat = 2 ;\s+lon = 3 ;/);
+    expect(header).toMatch(/time = 14 ;\s+nv = 2 ;\s+lat = 2 ;\s+lon = 3 ;/);
+    expect(header).not.toMatch(/ nv\(nv\)/); // a dimension without a variable, as netCDF-C writes it
+    expect(header).toContain('double time_bnds(time, nv) ;');
     expect(header).toContain('float x(time, lat, lon) ;');
     expect(header).toContain('time:units = "days since 1980-01-01" ;');
     expect(header).toContain(':Conventions = "CF-1.8" ;');
