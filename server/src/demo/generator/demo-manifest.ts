@@ -11,9 +11,11 @@ export interface DemoSeriesEntry {
   variable: string;
   units: string;
   region: string;
-  depthLayer: string;
+  /** The layer in metres below the surface as the import takes it (bottomM null = sea floor); null for the surface index. */
+  depthLayer: { topM: number; bottomM: number | null } | null;
   source: string;
   origin: DataOrigin;
+  /** What the series is, saying it is synthetic (the import's `notes`). */
   description: string;
 }
 
@@ -59,6 +61,8 @@ export const DEMO_FILES = {
 } as const;
 
 export const DEMO_REGION = 'Eastern equatorial sector, 5°S–5°N';
+const UPPER_LAYER = { topM: 0, bottomM: 100 };
+const FULL_DEPTH = { topM: 0, bottomM: null };
 
 /** Budget columns of carbon-budget.csv: column name, series name, kind. Tendency first. */
 export const BUDGET_COLUMNS: { term: BudgetTerm | 'tendency'; column: string; name: string; kind: SeriesKind; what: string }[] = [
@@ -78,20 +82,20 @@ export function demoCatalogue(release: DemoRelease): { series: DemoSeriesEntry[]
   const series: DemoSeriesEntry[] = [
     {
       file: DEMO_FILES.index, column: 'value', name: 'Niño-like SST index (demo)', kind: 'climate-index', variable: 'SST', units: '°C',
-      region: 'Equatorial Pacific', depthLayer: 'surface', source: 'Upwell demo generator (stochastic recharge oscillator, Jin 1997)', origin: 'observation',
+      region: 'Equatorial Pacific', depthLayer: null, source: 'Upwell demo generator (stochastic recharge oscillator, Jin 1997)', origin: 'observation',
       description: `Monthly mean SST of a Niño-like box, absolute °C. It stands in for an observed index in the demo story but is synthetic: a stochastically forced recharge oscillator (Jin 1997) with seasonally modulated growth plus a climatological mean and seasonal cycle. ${synthetic}`,
     },
     {
       file: DEMO_FILES.inventory, column: 'dic_0_100m', name: 'DIC inventory 0–100 m', kind: 'carbon-inventory', variable: 'DIC', units: 'Pg C',
-      region: DEMO_REGION, depthLayer: '0–100 m', source, origin: 'model-output', description: model('Dissolved inorganic carbon held in the 0–100 m layer at the end of each month'),
+      region: DEMO_REGION, depthLayer: UPPER_LAYER, source, origin: 'model-output', description: model('Dissolved inorganic carbon held in the 0–100 m layer at the end of each month'),
     },
     {
       file: DEMO_FILES.inventory, column: 'dic_full_depth', name: 'DIC inventory full depth', kind: 'carbon-inventory', variable: 'DIC', units: 'Pg C',
-      region: DEMO_REGION, depthLayer: 'full depth', source, origin: 'model-output', description: model('Dissolved inorganic carbon held over the full depth at the end of each month'),
+      region: DEMO_REGION, depthLayer: FULL_DEPTH, source, origin: 'model-output', description: model('Dissolved inorganic carbon held over the full depth at the end of each month'),
     },
     ...BUDGET_COLUMNS.map((b): DemoSeriesEntry => ({
       file: DEMO_FILES.budget, column: b.column, name: b.name, kind: b.kind, variable: 'DIC', units: 'Pg C/yr',
-      region: DEMO_REGION, depthLayer: '0–100 m', source, origin: 'model-output',
+      region: DEMO_REGION, depthLayer: UPPER_LAYER, source, origin: 'model-output',
       description: model(`DIC budget term of the 0–100 m layer: ${b.what}; the tendency equals the sum of the five terms to within ${BUDGET_RESIDUAL_MAX} Pg C/yr`),
     })),
   ];

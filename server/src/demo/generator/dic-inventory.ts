@@ -18,6 +18,9 @@ export const DEMO_INVENTORY = {
   deepNoise: 0.01,
 } as const;
 
+/** The inventory parameters, each a number (see DEMO_INVENTORY for units). */
+export type InventoryParams = { [K in keyof typeof DEMO_INVENTORY]: number };
+
 /** Monthly DIC inventories, Pg C, at the end of each month. */
 export interface Inventories {
   upper: Float64Array;
@@ -29,7 +32,7 @@ export interface Inventories {
  * each month taken as 1/12 year (a convention of the demo). The full depth adds a slow deep
  * uptake trend, part of the upper layer's change and one Gaussian draw per month (drawn in order).
  */
-export function dicInventories(random: RandomStream, tendency: Float64Array, p: typeof DEMO_INVENTORY = DEMO_INVENTORY): Inventories {
+export function dicInventories(random: RandomStream, tendency: Float64Array, p: InventoryParams = DEMO_INVENTORY): Inventories {
   const n = tendency.length;
   const upper = new Float64Array(n);
   const fullDepth = new Float64Array(n);

@@ -34,7 +34,8 @@ describe('createRandomStream()', () => {
     expect(z.every(Number.isFinite)).toBe(true);
   });
 
-  it('refuses a seed that is not an integer', () => {
-    expect(() => createRandomStream(1.5)).toThrow(/seed must be an integer/);
+  it('refuses a seed that is not a non-negative 32-bit integer', () => {
+    for (const bad of [1.5, -1, 2 ** 31, Number.NaN]) expect(() => createRandomStream(bad)).toThrow(/seed must be an integer from 0 to 2147483647/);
+    expect(() => createRandomStream(2 ** 31 - 1)).not.toThrow();
   });
 });

@@ -14,15 +14,16 @@ export interface RandomStream {
 
 /**
  * One random stream: pure-rand's xoroshiro128+ (Blackman & Vigna, "Scrambled linear pseudorandom
- * number generators", ACM TOMS 47(4), 2021), seeded with the 32-bit integer `seed` through
+ * number generators", ACM TOMS 47(4), 2021), seeded with the non-negative 32-bit integer `seed` through
  * pure-rand's `xoroshiro128plus(seed)`; uniforms by pure-rand's `uniformFloat64` (two 32-bit outputs
  * → 53 bits). Gaussians by the Box–Muller transform (Box & Muller 1958, Ann. Math. Statist. 29,
  * 610–611): z0 = √(−2 ln u1)·cos(2π u2), z1 = √(−2 ln u1)·sin(2π u2); both are used, in that order.
  * The generator is mutated in place, so the order of calls fixes the output.
  */
 export function createRandomStream(seed: number): RandomStream {
-  if (!Number.isInteger(seed)) throw new Error(`seed must be an integer, got ${seed}`);
-  const rng = xoroshiro128plus(seed | 0);
+  // pure-rand seeds from a 32-bit integer; larger seeds would silently collide, so they are refused.
+  if (!Number.isInteger(seed) || seed < 0 || seed > 0x7fff_ffff) throw new Error(`seed must be an integer from 0 to 2147483647, got ${seed}`);
+  const rng = xoroshiro128plus(seed);
   let spare: number | null = null;
   const uniform = () => uniformFloat64(rng);
   return {

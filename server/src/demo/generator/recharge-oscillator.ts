@@ -37,7 +37,7 @@ export interface RechargeOscillatorParams {
  * The demo's values, chosen (not fitted) so that the index has a 3–5-year period, an anomaly sd
  * near 0.9 °C, events locked to the season (growth largest in boreal late summer, peaks near the
  * turn of the year) and warm events stronger than cold ones (positive skewness). For the linear part the complex
- * eigenvalues of [[R0, F1], [−F2, −ε]] give a decay of (R0 − ε)/2 = −0.045 per month and a
+ * eigenvalues of [[R0, F1], [−F2, −ε]] give a decay of (R0 − ε)/2 = −0.03 per month and a
  * frequency √(F1·F2 − ((R0 + ε)/2)²) ≈ 2π/47 per month.
  */
 export const DEMO_OSCILLATOR: RechargeOscillatorParams = {

@@ -26,6 +26,9 @@ export const DEMO_FIELD = {
   noise: 2,
 } as const;
 
+/** The shape parameters of the field, each a number (see DEMO_FIELD for units). */
+export type SurfaceDicParams = { [K in keyof typeof DEMO_FIELD]: number };
+
 /** A (time, lat, lon) field in C order, time first. */
 export interface GriddedField {
   lat: number[];
@@ -51,7 +54,7 @@ function sstAt(sst: Float64Array, at: number): number {
  * so that a time–latitude diagram of the zonal mean shows anomalies spreading poleward; and one
  * Gaussian draw per cell and month, drawn in (time, lat, lon) order.
  */
-export function surfaceDicField(random: RandomStream, sst: Float64Array, p: typeof DEMO_FIELD = DEMO_FIELD): GriddedField {
+export function surfaceDicField(random: RandomStream, sst: Float64Array, p: SurfaceDicParams = DEMO_FIELD): GriddedField {
   const { lat, lon } = DEMO_GRID;
   const months = sst.length;
   const values = new Float32Array(months * lat.length * lon.length);

@@ -87,7 +87,7 @@ describe('writeDemoFiles()', () => {
     const f = await openNetcdf(join(root, 'a', DEMO_FILES.field));
     try {
       expect(f.format).toBe('netcdf4');
-      expect(f.dimensions.map((d) => `${d.name}=${d.size}`)).toEqual(['time=552', 'lat=20', 'lon=60']);
+      expect(f.dimensions.map((d) => `${d.name}=${d.size}`)).toEqual(['time=552', 'nv=2', 'lat=20', 'lon=60']);
       const v = f.variable('surface_dic');
       expect(v.dims).toEqual(['time', 'lat', 'lon']);
       expect(v.dtype).toBe('float32');
@@ -96,7 +96,7 @@ describe('writeDemoFiles()', () => {
       expect(f.globalAttributes.Conventions).toBe('CF-1.8');
       expect(String(f.globalAttributes.source)).toMatch(/synthetic/);
       const d = describeNetcdf(f);
-      expect(d.time).toMatchObject({ start: '1980-01', end: '2025-12', months: 552, calendar: 'standard' });
+      expect(d.time).toMatchObject({ start: '1980-01', end: '2025-12', months: 552, calendar: 'standard', fromBounds: true });
       expect(d.candidates.find((c) => c.name === 'surface_dic')).toMatchObject({ kind: 'field', layout: 'time-lat-lon' });
     } finally {
       f.close();

@@ -1,3 +1,4 @@
+import { execFileSync } from 'node:child_process';
 import { createHash } from 'node:crypto';
 import { mkdtemp, readFile, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
@@ -7,6 +8,15 @@ import { openNetcdf, readMonthlyTime } from '../../series/netcdf';
 import { midMonthDays, NC_FILL_FLOAT, writeFieldNetcdf4, type FieldFileDescription } from './write-netcdf4';
 
 let dir: string;
+// netCDF-C's own ncdump (Debian netcdf-bin) as a second opinion, where it is installed.
+const ncdump = (() => {
+  try {
+    execFileSync('ncdump', [], { stdio: 'ignore' });
+    return true;
+  } catch (error) {
+    return (error as { code?: string }).code !== 'ENOENT';
+  }
+})();
 beforeAll(async () => {
   dir = await mkdtemp(join(tmpdir(), 'upwell-nc4-'));
 });
@@ -32,10 +42,11 @@ describe('writeFieldNetcdf4()', () => {
     try {
       expect(f.dimensions).toEqual([
         { name: 'time', size: 14, unlimited: false },
+        { name: 'nv', size: 2, unlimited: false },
         { name: 'lat', size: 2, unlimited: false },
         { name: 'lon', size: 3, unlimited: false },
       ]);
-      expect(f.variables.map((v) => `${v.name}(${v.dims.join(',')})`)).toEqual(['time(time)', 'lat(lat)', 'lon(lon)', 'x(time,lat,lon)']);
+      expect(f.variables.map((v) => `${v.name}(${v.dims.join(',')})`)).toEqual(['time(time)', 'time_bnds(time,nv)', 'lat(lat)', 'lon(lon)', 'x(time,lat,lon)']);
       expect(Array.from(f.read('x'))).toEqual(Array.from(field.values));
       expect(Array.from(f.read('x', { start: [13, 1, 2], count: [1, 1, 1] }))).toEqual([1312]);
       expect(f.variable('x').attributes._FillValue).toBeCloseTo(NC_FILL_FLOAT, -30);
@@ -62,5 +73,19 @@ describe('writeFieldNetcdf4()', () => {
     await writeFieldNetcdf4(join(dir, 'c.nc'), field, description);
     expect(Math.abs(Date.now() - new Date().getTime())).toBeLessThan(1000);
     expect(Date.now()).toBeGreaterThan(new Date('2026-01-16T00:00:00Z').getTime());
+  });
+
+  it.skipIf(!ncdump)('is read by netCDF-C (ncdump -h): netCDF-4, dimensions, variable and char attributes', async () => {
+    const path = join(dir, 'ncdump.nc');
+    await writeFieldNetcdf4(path, field, description);
+    expect(execFileSync('ncdump', ['-k', path], { encoding: 'utf8' }).trim()).toBe('netCDF-4');
+    const header = execFileSync('ncdump', ['-h', path], { encoding: 'utf8' });
+    expect(header).toMatch(/time = 14 ;\s+nv = 2 ;\s+lat = 2 ;\s+lon = 3 ;/);
+    expect(header).not.toMatch(/ nv\(nv\)/); // a dimension without a variable, as netCDF-C writes it
+    expect(header).toContain('double time_bnds(time, nv) ;');
+    expect(header).toContain('float x(time, lat, lon) ;');
+    expect(header).toContain('time:units = "days since 1980-01-01" ;');
+    expect(header).toContain(':Conventions = "CF-1.8" ;');
+    expect(header).toContain('x:_FillValue = 9.96921e+36f ;');
   });
 });

@@ -22,15 +22,30 @@ const DAY_MS = 86_400_000;
 
 /** Mid-month times in days since 1 January of `startYear`, standard calendar (CF 1.8 §4.4.1). */
 export function midMonthDays(startYear: number, months: number): Float64Array {
-  const origin = Date.UTC(startYear, 0, 1);
-  return Float64Array.from({ length: months }, (_, i) => (Date.UTC(startYear, i, 1) + Date.UTC(startYear, i + 1, 1)) / 2 / DAY_MS - origin / DAY_MS);
+  const bounds = monthBoundsDays(startYear, months);
+  return Float64Array.from({ length: months }, (_, i) => (bounds[2 * i] + bounds[2 * i + 1]) / 2);
 }
+
+/** Month bounds [first day, first day of the next month] in days since 1 January of `startYear`, (months, 2) in C order. */
+export function monthBoundsDays(startYear: number, months: number): Float64Array {
+  const origin = Date.UTC(startYear, 0, 1);
+  const out = new Float64Array(2 * months);
+  for (let i = 0; i < months; i++) {
+    out[2 * i] = (Date.UTC(startYear, i, 1) - origin) / DAY_MS;
+    out[2 * i + 1] = (Date.UTC(startYear, i + 1, 1) - origin) / DAY_MS;
+  }
+  return out;
+}
+
+// netCDF-C marks a dimension that has no coordinate variable by this NAME (its DIM_WITHOUT_VARIABLE, then the
+// length in 10 characters), as in the NetCDF-4 files netCDF-C writes (server/test/fixtures/netcdf/series-netcdf4.nc).
+const dimensionWithoutVariable = (length: number) => `This is a netCDF dimension but not a netCDF variable.${String(length).padStart(10)}`;
 
 /**
  * Writes a (time, lat, lon) field as a NetCDF-4 file (HDF5 underneath, h5wasm): time, lat and lon
  * are HDF5 dimension scales (HDF5 Dimension Scale Specification: CLASS = "DIMENSION_SCALE", NAME,
  * and DIMENSION_LIST references on the variable), the way the NetCDF-4 format stores
- * dimensions ("NetCDF-4 Format", netCDF-C documentation); attributes follow CF 1.8 (time units
+ * dimensions ("NetCDF-4 Format", netCDF-C documentation), with month bounds in time_bnds; attributes follow CF 1.8 (time units
  * "days since", calendar, degrees_north/east, units, long_name, _FillValue). Creation order is
  * tracked so the variables list in the order written. float32 data, chunked by year and deflated.
  */
@@ -44,7 +59,13 @@ export async function writeFieldNetcdf4(path: string, field: GriddedField, d: Fi
     try {
       const time = file.create_dataset({ name: 'time', data: midMonthDays(d.startYear, field.months), dtype: '<d' });
       time.make_scale('time');
-      attrs(time, { standard_name: 'time', long_name: 'time', units: `days since ${d.startYear}-01-01`, calendar: 'standard', axis: 'T' });
+      attrs(time, { standard_name: 'time', long_name: 'time', units: `days since ${d.startYear}-01-01`, calendar: 'standard', axis: 'T', bounds: 'time_bnds' });
+      // Monthly means: each step's cell is its calendar month (CF 1.8 §7.1 bounds, §7.3 cell_methods).
+      const nv = file.create_dataset({ name: 'nv', data: new Float32Array(2), dtype: '<f' });
+      nv.make_scale(dimensionWithoutVariable(2));
+      const bounds = file.create_dataset({ name: 'time_bnds', data: monthBoundsDays(d.startYear, field.months), shape: [field.months, 2], dtype: '<d' });
+      bounds.attach_scale(0, 'time');
+      bounds.attach_scale(1, 'nv');
       const lat = file.create_dataset({ name: 'lat', data: Float64Array.from(field.lat), dtype: '<d' });
       lat.make_scale('lat');
       attrs(lat, { standard_name: 'latitude', long_name: 'latitude', units: 'degrees_north', axis: 'Y' });
@@ -64,7 +85,7 @@ export async function writeFieldNetcdf4(path: string, field: GriddedField, d: Fi
       v.attach_scale(1, 'lat');
       v.attach_scale(2, 'lon');
       v.create_attribute('_FillValue', NC_FILL_FLOAT, null, '<f');
-      attrs(v, { long_name: d.longName, units: d.units });
+      attrs(v, { long_name: d.longName, units: d.units, cell_methods: 'time: mean' });
       attrs(file, { Conventions: 'CF-1.8', ...d.global });
     } finally {
       file.close();
@@ -74,6 +95,7 @@ export async function writeFieldNetcdf4(path: string, field: GriddedField, d: Fi
   }
 }
 
-function attrs(target: { create_attribute(name: string, data: string): void }, values: Record<string, string>): void {
-  for (const [name, value] of Object.entries(values)) target.create_attribute(name, value);
+/** Text attributes as fixed-length UTF-8 strings, which netCDF-C reads as classic `char` attributes. */
+function attrs(target: { create_attribute(name: string, data: string, shape: null, dtype: string): void }, values: Record<string, string>): void {
+  for (const [name, value] of Object.entries(values)) target.create_attribute(name, value, null, `S${Buffer.byteLength(value, 'utf8')}`);
 }
