@@ -5,7 +5,6 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import request from 'supertest';
 import * as Y from 'yjs';
-import { depthLayerOf } from '../src/demo/seed/demo-release';
 import { writeDemoFiles } from '../src/demo/generator/write-demo-files';
 import { listRecipes, type DocJson } from '../src/notebook-files/recipe-refs';
 
@@ -24,7 +23,7 @@ export async function uploadDemoSeries(url: string, auth: Auth, groupId: string,
     const fields = manifest.fields.filter((f) => f.file === file && keep(f.zonalMeanName));
     if (!series.length && !fields.length) continue;
     const preview = (await request(url).post(`/api/groups/${groupId}/uploads`).set(auth).attach('file', join(dir, file)).expect(201)).body as UploadPreview;
-    const columns = series.map((s) => ({ column: s.column, skip: false, name: s.name, kind: s.kind, variable: s.variable, units: s.units, region: s.region, depthLayer: depthLayerOf(s.depthLayer), source: s.source }));
+    const columns = series.map((s) => ({ column: s.column, skip: false, name: s.name, kind: s.kind, variable: s.variable, units: s.units, region: s.region, depthLayer: s.depthLayer, source: s.source }));
     const grids = fields.map((f) => ({ variable: f.variable, name: f.longName }));
     const imported = await request(url).post(`/api/uploads/${preview.uploadId}/import`).set(auth).send({ origin: series[0]?.origin ?? 'model-output', columns, grids }).expect(200);
     for (const [i, f] of fields.entries()) {

@@ -26,14 +26,6 @@ export interface DemoUpload {
   zonalMean: { name: string; lat: [number, number]; lon: [number, number] } | null;
 }
 
-/** "0–100 m" → 0…100 m; "surface" and "full depth" as the import form would enter them. */
-export function depthLayerOf(text: string): DepthLayer | null {
-  const m = /^(\d+)\s*[–-]\s*(\d+)\s*m$/.exec(text.trim());
-  if (m) return { topM: Number(m[1]), bottomM: Number(m[2]) };
-  if (text === 'full depth') return { topM: 0, bottomM: null };
-  return null;
-}
-
 /** Writes one release of the demo model run into `dir` and groups its manifest by file, in upload order. */
 export async function demoRelease(dir: string, release: 1 | 2): Promise<DemoUpload[]> {
   const manifest = await writeDemoFiles(dir, { release });
@@ -41,7 +33,7 @@ export async function demoRelease(dir: string, release: 1 | 2): Promise<DemoUplo
   for (const { file } of manifest.files) {
     const columns = manifest.series
       .filter((s) => s.file === file)
-      .map((s) => ({ column: s.column, name: s.name, kind: s.kind, variable: s.variable, units: s.units, region: s.region, depthLayer: depthLayerOf(s.depthLayer), source: s.source, origin: s.origin, description: s.description }));
+      .map((s) => ({ column: s.column, name: s.name, kind: s.kind, variable: s.variable, units: s.units, region: s.region, depthLayer: s.depthLayer, source: s.source, origin: s.origin, description: s.description }));
     const fields = manifest.fields.filter((f) => f.file === file);
     if (!columns.length && !fields.length) continue;
     uploads.push({
