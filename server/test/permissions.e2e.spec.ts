@@ -10,6 +10,12 @@ import { buildGroup, buildNotebook, buildUser, type TestUser } from './factories
  * the next one finds. The expected table is written out here by hand, from
  * the roles as the product describes them, not derived from the server's code.
  */
+/** The smallest notebook file there is: one empty paragraph, no bindings. */
+const EMPTY_NOTEBOOK_FILE = {
+  format: 'upwell-notebook', formatVersion: 1, title: 'Imported', exportedAt: '2026-12-01T00:00:00Z', editorSchemaVersion: 1,
+  document: { type: 'doc', content: [{ type: 'paragraph' }] },
+};
+
 type NotebookActor = 'lead' | 'coauthor' | 'reviewer' | 'reader' | 'member' | 'outsider';
 type GroupActor = 'admin' | 'member' | 'outsider';
 
@@ -52,6 +58,8 @@ describe('permission matrix', () => {
       { lead: 200, coauthor: 200, reviewer: 200, reader: 200, member: 404, outsider: 404 }],
     ['GET /api/notebooks/:id/roles', ({ notebookId }) => request(t.url).get(`/api/notebooks/${notebookId}/roles`),
       { lead: 200, coauthor: 200, reviewer: 200, reader: 200, member: 404, outsider: 404 }],
+    ['GET /api/notebooks/:id/export', ({ notebookId }) => request(t.url).get(`/api/notebooks/${notebookId}/export`),
+      { lead: 200, coauthor: 200, reviewer: 200, reader: 200, member: 404, outsider: 404 }],
     ['PATCH /api/notebooks/:id (rename)', ({ notebookId }) => request(t.url).patch(`/api/notebooks/${notebookId}`).send({ title: 'Renamed' }),
       { lead: 200, coauthor: 403, reviewer: 403, reader: 403, member: 404, outsider: 404 }],
     ['PATCH /api/notebooks/:id (archive)', ({ notebookId }) => request(t.url).patch(`/api/notebooks/${notebookId}`).send({ archived: true }),
@@ -82,6 +90,8 @@ describe('permission matrix', () => {
     ['PATCH /api/groups/:id/members/:userId', ({ groupId, w }) => request(t.url).patch(`/api/groups/${groupId}/members/${w.spare.user.id}`).send({ role: 'admin' }), { admin: 200, member: 403, outsider: 404 }],
     ['DELETE /api/groups/:id/members/:userId', ({ groupId, w }) => request(t.url).delete(`/api/groups/${groupId}/members/${w.spare.user.id}`), { admin: 204, member: 403, outsider: 404 }],
     ['GET /api/groups/:id/notebooks', ({ groupId }) => request(t.url).get(`/api/groups/${groupId}/notebooks`), { admin: 200, member: 200, outsider: 404 }],
+    // Notebook files (issue 8): any member may import, as any member may create a notebook.
+    ['POST /api/groups/:id/notebooks/import', ({ groupId }) => request(t.url).post(`/api/groups/${groupId}/notebooks/import`).send(EMPTY_NOTEBOOK_FILE), { admin: 201, member: 201, outsider: 404 }],
     ['POST /api/groups/:id/notebooks', ({ groupId }) => request(t.url).post(`/api/groups/${groupId}/notebooks`).send({ title: 'New analysis' }), { admin: 201, member: 201, outsider: 404 }],
   ];
   const groupActor = (a: GroupActor) => (a === 'admin' ? w.lead : a === 'member' ? w.member : w.outsider);
