@@ -15,6 +15,8 @@ describe('the demo, as a newcomer walks it', () => {
     const page = await context.newPage();
     const errors = watchErrors(page);
     await page.goto(`${h.server.url}/sign-in`);
+    await page.getByRole('list', { name: 'Demo accounts' }).waitFor();
+    await screenshot(page, 'demo-sign-in');
     await page.getByRole('button', { name: 'Fill in as lead author Ilse Marrow' }).click();
     await page.getByRole('form', { name: 'Sign in' }).getByRole('button', { name: 'Sign in' }).click();
     await page.waitForURL('**/notebooks');
