@@ -169,6 +169,10 @@ describe('read-only snapshots', () => {
       expect(res.text).toBe(firstBody);
       await request(t.url).get(`/api/snapshots/${first.id}`).set(outsider.auth).expect(404);
       await request(t.url).get(`/api/snapshots/not-an-id`).set(reader.auth).expect(400);
+      // Signed out, only share links open snapshots.
+      await request(t.url).get(`/api/snapshots/${first.id}`).expect(401);
+      await request(t.url).get(`/api/snapshots/${first.id}/html`).expect(401);
+      await request(t.url).get(`/api/notebooks/${notebookId}/snapshots`).expect(401);
     });
 
     it('nobody can edit a snapshot: there is no route that changes one', async () => {
