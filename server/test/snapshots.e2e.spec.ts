@@ -212,6 +212,7 @@ describe('read-only snapshots', () => {
       const svg = Buffer.from(srcs[0].slice('data:image/svg+xml;base64,'.length), 'base64').toString('utf8');
       expect(svg).toMatch(/^<svg/);
       expect(svg).not.toMatch(/<script/i);
+      expect(svg).toContain('<path'); // the line and the event shading were drawn
       const urls = [...html.matchAll(/url\(([^)]*)\)/g)].map((m) => m[1]);
       expect(urls.length).toBe(6); // Merriweather 400/400 italic/700, Source Sans 3 400/600, IBM Plex Mono 400
       for (const u of urls) expect(u).toMatch(/^data:font\/woff2;base64,/);
