@@ -24,7 +24,7 @@ figure.live-figure{margin:2rem 0;break-inside:avoid}
 figure.live-figure img{display:block;max-width:100%;height:auto;background:#fff}
 figcaption{font-family:'Source Sans 3',system-ui,sans-serif;font-size:.95rem;margin-top:.5rem}
 figcaption .methods,figcaption .cautions{color:var(--muted)}
-.provenance{font-size:.78rem;color:var(--muted);padding-left:1.2rem}
+.provenance{font-size:.78rem;color:var(--muted);padding-left:1.2rem;overflow-wrap:anywhere}
 .figure-error{color:#8a1c1c}
 .live-number{font-family:'IBM Plex Mono',ui-monospace,monospace;font-size:.92em}
 @media print{body{background:#fff;font-size:11pt}main{max-width:none;padding:0}a{color:inherit}.notice{background:none}}
