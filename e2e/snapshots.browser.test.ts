@@ -72,6 +72,12 @@ describe('snapshots in Chromium', () => {
     const page = await leadCtx.newPage();
     const errors = watchErrors(page);
     const dialogs = watchDialogs(page);
+    // On failure: a screenshot of the lead author's page and what its console said.
+    const failed = async (err: Error) => {
+      await screenshot(page, 'snapshots-failure').catch(() => {});
+      throw new Error(`${err.message}\nconsole: ${errors.join(' | ')}`);
+    };
+    try {
     await page.goto(`${url}/notebooks/${nb.id}`);
     await page.locator('.ProseMirror').waitFor();
     await page.locator('[role="figure"] svg').first().waitFor({ timeout: 30_000 });
@@ -204,6 +210,9 @@ describe('snapshots in Chromium', () => {
     expect(unexpected(errors)).toEqual([]);
     await anon.close();
     await readerCtx.close();
+    } catch (err) {
+      await failed(err as Error);
+    }
     await leadCtx.close();
   });
 });
