@@ -85,7 +85,8 @@ export class SnapshotsService {
    * snapshot whose bytes did not land as computed is never committed.
    */
   async verifyStored(tx: EntityManager, snapshotId: string, contentSha256: string): Promise<void> {
-    const rows = await tx.getConnection().execute<{ payload: string }[]>('select payload from notebook_snapshots where id = ?', [snapshotId]);
+    // Inside the transaction's own connection (SQLite has one writer; another connection would wait on it).
+    const rows = await tx.getConnection().execute<{ payload: string }[]>('select payload from notebook_snapshots where id = ?', [snapshotId], 'all', tx.getTransactionContext());
     if (rows.length !== 1 || sha256(rows[0].payload) !== contentSha256) {
       throw new InternalServerErrorException('the snapshot was not stored intact; nothing was published');
     }

@@ -86,6 +86,6 @@ export async function snapshotHtml(snapshot: SnapshotView): Promise<string> {
 
 /** "the-warm-event-of-1997-v3.html": the file name of a snapshot. */
 export function snapshotFileName(notebookTitle: string, number: number): string {
-  const slug = notebookTitle.toLowerCase().normalize('NFKD').replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '').slice(0, 80) || 'notebook';
+  const slug = notebookTitle.toLowerCase().normalize('NFKD').replace(/[\u0300-\u036f]/g, '').replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '').slice(0, 80) || 'notebook';
   return `${slug}-v${number}.html`;
 }
