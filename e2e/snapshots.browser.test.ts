@@ -72,6 +72,12 @@ describe('snapshots in Chromium', () => {
     const page = await leadCtx.newPage();
     const errors = watchErrors(page);
     const dialogs = watchDialogs(page);
+    // On failure: a screenshot of the lead author's page and what its console said.
+    const failed = async (err: Error) => {
+      await screenshot(page, 'snapshots-failure').catch(() => {});
+      throw new Error(`${err.message}\nconsole: ${errors.join(' | ')}`);
+    };
+    try {
     await page.goto(`${url}/notebooks/${nb.id}`);
     await page.locator('.ProseMirror').waitFor();
     await page.locator('[role="figure"] svg').first().waitFor({ timeout: 30_000 });
@@ -149,6 +155,7 @@ describe('snapshots in Chromium', () => {
     await download.saveAs(file);
     const html = readFileSync(file, 'utf8');
     expect(html).not.toMatch(/<script/i);
+    expect(html).not.toMatch(/href\s*=\s*["']?\s*javascript:/i);
     const offline = await h.browser.newContext();
     await offline.setOffline(true);
     const op = await offline.newPage();
@@ -164,12 +171,22 @@ describe('snapshots in Chromium', () => {
     // Each figure image decoded (naturalWidth > 0 only for a loaded image, HTML Standard §4.8.4.4).
     await expect.poll(() => images.evaluateAll((imgs) => imgs.every((i) => (i as HTMLImageElement).complete && (i as HTMLImageElement).naturalWidth > 0))).toBe(true);
     expect(await op.evaluate(() => document.scripts.length)).toBe(0);
+    expect(await op.locator('a[href^="javascript"], [onerror]').count()).toBe(0);
     expect(await op.evaluate(() => window.__snapPwned)).toBeUndefined();
     expect(offlineDialogs).toEqual([]);
     // Nothing reached for the network: only the file itself and its data: URIs.
     expect(requests.filter((r) => !r.startsWith('file:') && !r.startsWith('data:'))).toEqual([]);
     await screenshot(op, 'snapshot-html-offline');
     await offline.close();
+
+    // The comparison with the live notebook, against the real server: nothing edited, so no text changed.
+    await page.goto(snapshotUrl);
+    await page.getByRole('link', { name: 'Compare with the live notebook' }).click();
+    await page.waitForURL(/\/compare\?from=.*&to=live$/);
+    await page.getByRole('heading', { name: 'Live numbers' }).waitFor({ timeout: 30_000 });
+    await page.getByText('0 words inserted, 0 words deleted.').waitFor();
+    await page.getByRole('group', { name: 'Figure 1' }).getByText('Unchanged').waitFor();
+    await screenshot(page, 'snapshot-compare-live');
 
     // 4. A share link: made by the lead author, opened without signing in, then revoked.
     await page.goto(`${url}/notebooks/${nb.id}`);
@@ -204,6 +221,9 @@ describe('snapshots in Chromium', () => {
     expect(unexpected(errors)).toEqual([]);
     await anon.close();
     await readerCtx.close();
+    } catch (err) {
+      await failed(err as Error);
+    }
     await leadCtx.close();
   });
 });
