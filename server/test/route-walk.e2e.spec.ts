@@ -141,7 +141,7 @@ describe('route walk over the OpenAPI document', () => {
     if (rule.scope === 'group') return groupRoleAllows(actor === 'lead' ? 'admin' : 'member', rule.action) ? 'ok' : 403;
     const role = NOTEBOOK_ROLE_OF[actor];
     if (!role) return 404;
-    return notebookRoleAllows(role, rule.action) ? 'ok' : 403;
+    return notebookRoleAllows(role, (rule as Extract<RouteRule, { scope: 'notebook' }>).action) ? 'ok' : 403;
   }
 
   it('answers each actor as the roles table predicts; outsiders get 404 for group A’s ids', async () => {
