@@ -34,6 +34,8 @@ export async function buildApp(env: NodeJS.ProcessEnv = process.env, opts: { log
       },
     }),
   );
+  // Browsers may call the API from the app's own origin only; same-origin requests need no CORS headers at all.
+  app.enableCors({ origin: [config.appOrigin], credentials: false });
   installJsonBodyParser(app);
   app.setGlobalPrefix('api', { exclude: [] });
   app.useGlobalFilters(new AllExceptionsFilter());

@@ -146,7 +146,29 @@ describe('sign-in rate limit', () => {
     }
     expect(codes.slice(0, 3)).toEqual([401, 401, 401]);
     expect(codes.slice(3)).toEqual([429, 429]);
+    const limited = await request(t.url).post('/api/auth/login').send({ email: 'who@example.org', password: 'one more guess' }).expect(429);
+    expect(limited.body).toMatchObject({ statusCode: 429, error: 'Too Many Requests', message: expect.stringContaining('wait a minute') });
     // Other routes are not limited by the sign-in throttle.
+    await request(t.url).get('/api/health').expect(200);
+  });
+});
+
+describe('sign-up rate limit', () => {
+  let t: TestApp;
+  beforeAll(async () => {
+    t = await startTestApp({ AUTH_ATTEMPTS_PER_MINUTE: '2' });
+  });
+  afterAll(() => t.close());
+
+  it('answers 429 with a JSON message once a client has signed up too often in a minute', async () => {
+    const codes: number[] = [];
+    for (let i = 0; i < 4; i++) {
+      const res = await request(t.url).post('/api/auth/register').send({ name: `Signer ${i}`, email: `signer${i}@example.org`, password: 'correct horse battery' });
+      codes.push(res.status);
+      if (res.status === 429) expect(res.body.message).toContain('too many sign-in or sign-up attempts');
+    }
+    expect(codes).toEqual([201, 201, 429, 429]);
+    // The limit is the sign-in/sign-up throttle only; the rest of the API still answers.
     await request(t.url).get('/api/health').expect(200);
   });
 });

@@ -25,7 +25,10 @@ import { JwtStrategy } from './jwt.strategy';
     // Only sign-in and sign-up use the throttler guard; the rest of the API is not rate-limited by address.
     ThrottlerModule.forRootAsync({
       inject: [ConfigService],
-      useFactory: (config: ConfigService) => [{ ttl: 60_000, limit: config.getOrThrow<AppConfig>(APP_CONFIG).authAttemptsPerMinute }],
+      useFactory: (config: ConfigService) => ({
+        throttlers: [{ ttl: 60_000, limit: config.getOrThrow<AppConfig>(APP_CONFIG).authAttemptsPerMinute }],
+        errorMessage: 'too many sign-in or sign-up attempts from this address; wait a minute and try again',
+      }),
     }),
   ],
   controllers: [AuthController],

@@ -34,6 +34,10 @@ export class DocumentSessions {
       return { ok: false, error: 'doc:join needs { notebookId: string, schemaVersion: number }' };
     }
     const { notebookId, schemaVersion } = request;
+    // A newer editor than this server's could write nodes the server's schema and older editors cannot read.
+    if (!Number.isInteger(schemaVersion) || schemaVersion > EDITOR_SCHEMA_VERSION) {
+      return { ok: false, error: `this server runs editor schema version ${EDITOR_SCHEMA_VERSION}; version ${schemaVersion} is not one it knows` };
+    }
     if (schemaVersion < EDITOR_SCHEMA_VERSION) {
       return {
         ok: false,

@@ -24,6 +24,17 @@ export function toApiError(status: number, body: unknown): ApiError {
   return out;
 }
 
+/** Error codes of a full disk or quota: the file system's (ENOSPC, EDQUOT) and SQLite's (SQLITE_FULL). */
+const STORAGE_FULL = new Set(['ENOSPC', 'EDQUOT', 'SQLITE_FULL']);
+
+/** Whether an error (or the error it wraps) says the server's storage is full. */
+export function isStorageFull(err: unknown): boolean {
+  for (let e = err as { code?: unknown; cause?: unknown } | undefined, depth = 0; e && depth < 5; e = e.cause as typeof e, depth++) {
+    if (typeof e.code === 'string' && STORAGE_FULL.has(e.code)) return true;
+  }
+  return false;
+}
+
 /**
  * Every error leaves as JSON that says what was wrong; an unexpected one is
  * logged here and answered without its stack, so the server keeps running and
@@ -42,6 +53,11 @@ export class AllExceptionsFilter implements ExceptionFilter {
       return;
     }
     this.logger.error(exception instanceof Error ? exception.stack ?? exception.message : String(exception));
+    if (isStorageFull(exception)) {
+      // 507 Insufficient Storage (RFC 4918 §11.5): not the client's fault, and worth retrying once space is freed.
+      res.status(507).json(toApiError(507, 'the server has run out of storage space; nothing of this request was stored. Try again later, and tell whoever runs the server'));
+      return;
+    }
     res.status(500).json(toApiError(500, 'something went wrong on the server; the error was logged and nothing you sent was stored half-way'));
   }
 }

@@ -19,6 +19,8 @@ export interface AppConfig {
   uploadMaxBytes: number;
   /** Seed the demo group, people, series and notebooks on start (SEED_DEMO, on unless "false"). */
   seedDemo: boolean;
+  /** The one foreign origin browsers may call the API and socket from (CORS); the app's own address by default. */
+  appOrigin: string;
 }
 
 /** Name under which the config is registered with @nestjs/config. */
@@ -56,14 +58,27 @@ function seedDemo(raw: string | undefined): boolean {
   throw new Error(`SEED_DEMO must be "true" or "false", got "${raw}"`);
 }
 
+/** APP_ORIGIN as a browser sends it (scheme://host[:port], no path), or the fallback. */
+function origin(raw: string | undefined, fallback: string): string {
+  if (!raw) return fallback;
+  let url: URL;
+  try {
+    url = new URL(raw);
+  } catch {
+    throw new Error(`APP_ORIGIN must be an origin such as https://upwell.example.org, got "${raw}"`);
+  }
+  return url.origin;
+}
+
 /** Reads and checks the environment; creates DATA_DIR and the secret if missing. */
 export function loadAppConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
   const dataDir = resolve(env.DATA_DIR || './data');
   mkdirSync(dataDir, { recursive: true });
   const defaultWeb = resolve(__dirname, '../../../web/dist');
   const webDist = env.WEB_DIST === '' ? null : resolve(env.WEB_DIST || defaultWeb);
+  const port = positiveInt('PORT', env.PORT, 3000);
   return {
-    port: positiveInt('PORT', env.PORT, 3000),
+    port,
     dataDir,
     databaseFile: join(dataDir, 'upwell.sqlite'),
     jwtSecret: jwtSecret(dataDir, env.JWT_SECRET),
@@ -72,5 +87,6 @@ export function loadAppConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     authAttemptsPerMinute: positiveInt('AUTH_ATTEMPTS_PER_MINUTE', env.AUTH_ATTEMPTS_PER_MINUTE, 20),
     uploadMaxBytes: positiveInt('UPLOAD_MAX_BYTES', env.UPLOAD_MAX_BYTES, 2 * 1024 ** 3),
     seedDemo: seedDemo(env.SEED_DEMO),
+    appOrigin: origin(env.APP_ORIGIN, `http://localhost:${port}`),
   };
 }

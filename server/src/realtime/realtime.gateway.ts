@@ -1,9 +1,12 @@
 import { EntityManager } from '@mikro-orm/sqlite';
 import { Logger } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
 import { OnGatewayConnection, OnGatewayInit, WebSocketGateway } from '@nestjs/websockets';
 import { SOCKET_CLOSE_REASONS, SOCKET_EVENTS } from '@upwell/common';
 import type { Server, Socket } from 'socket.io';
 import { AuthService } from '../auth/auth.service';
+import { isAllowedOrigin } from '../common/same-origin';
+import { APP_CONFIG, type AppConfig } from '../config/app-config';
 import { GroupMembership } from '../groups/group.entity';
 import { groupRoom, RealtimeEvents, userRoom } from './realtime-events';
 
@@ -32,10 +35,15 @@ export class RealtimeGateway implements OnGatewayInit, OnGatewayConnection {
     private readonly auth: AuthService,
     private readonly em: EntityManager,
     private readonly events: RealtimeEvents,
+    private readonly config: ConfigService,
   ) {}
 
   afterInit(server: Server): void {
     this.events.attach(server);
+    // CORS does not cover WebSockets: refuse a handshake a foreign page started (engine.io reads this option per request).
+    const appOrigin = this.config.getOrThrow<AppConfig>(APP_CONFIG).appOrigin;
+    server.engine.opts.allowRequest = (req, done) =>
+      isAllowedOrigin(req.headers.origin, req.headers.host, appOrigin) ? done(null, true) : done('this origin may not open the socket', false);
   }
 
   async handleConnection(socket: Socket): Promise<void> {

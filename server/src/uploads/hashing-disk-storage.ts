@@ -1,5 +1,5 @@
 import { createHash, randomUUID } from 'node:crypto';
-import { createWriteStream, mkdirSync, rmSync } from 'node:fs';
+import { createWriteStream, mkdirSync, readdirSync, rmSync, statSync } from 'node:fs';
 import { join } from 'node:path';
 import { Transform } from 'node:stream';
 import { pipeline } from 'node:stream/promises';
@@ -20,6 +20,7 @@ export interface HashedFile {
  */
 export function hashingDiskStorage(tmpDir: string): StorageEngine {
   mkdirSync(tmpDir, { recursive: true });
+  sweepStaleParts(tmpDir);
   return {
     _handleFile(_req: Request, file, cb) {
       const path = join(tmpDir, `${randomUUID()}.part`);
@@ -45,4 +46,21 @@ export function hashingDiskStorage(tmpDir: string): StorageEngine {
       cb(null);
     },
   };
+}
+
+/** Part files older than this were left by a server that died mid-upload; younger ones may be another instance's. */
+const STALE_PART_MS = 60 * 60 * 1000;
+
+/** Removes part files a killed server left behind; they were never uploads (no row points at them). */
+function sweepStaleParts(tmpDir: string): void {
+  const now = Date.now();
+  for (const name of readdirSync(tmpDir)) {
+    if (!name.endsWith('.part')) continue;
+    const path = join(tmpDir, name);
+    try {
+      if (now - statSync(path).mtimeMs > STALE_PART_MS) rmSync(path, { force: true });
+    } catch {
+      // Gone already (another instance swept it).
+    }
+  }
 }

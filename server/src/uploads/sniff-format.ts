@@ -23,9 +23,13 @@ export async function sniffFormat(path: string): Promise<UploadFormat | null> {
   }
 }
 
-/** A file name as shown to people: no folders, no control characters, at most 255 characters. */
+/**
+ * A file name as shown to people: no folders, no control characters, no
+ * bidirectional overrides or isolates (which can make "gpj.exe" read as
+ * "exe.jpg", Unicode TR #9 / CVE-2021-42574 "Trojan Source"), at most 255 characters.
+ */
 export function cleanFileName(name: string): string {
   const base = name.split(/[\\/]/).pop() ?? '';
-  const clean = base.replace(/[\u0000-\u001f\u007f]/g, '').trim().slice(0, 255);
-  return clean || 'upload';
+  const clean = base.replace(/[\u0000-\u001f\u007f\u200e\u200f\u202a-\u202e\u2066-\u2069]/g, '').trim().slice(0, 255);
+  return clean && clean !== '.' && clean !== '..' ? clean : 'upload';
 }

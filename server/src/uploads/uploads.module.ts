@@ -20,6 +20,8 @@ import { UploadsService } from './uploads.service';
         return {
           storage: hashingDiskStorage(join(app.dataDir, 'uploads', 'tmp')),
           limits: { fileSize: app.uploadMaxBytes, files: 1, fields: 5, fieldSize: 64 * 1024, parts: 8 },
+          // Browsers send the file name as raw UTF-8 (HTML's multipart/form-data encoding); busboy's default reads it as Latin-1.
+          defParamCharset: 'utf8',
         };
       },
     }),
