@@ -45,6 +45,12 @@ export interface World {
   notificationId: string;
   /** A Yjs update a co-author could send to the notebook's document, base64. */
   documentUpdate: string;
+  /** Snapshot v1 of the notebook, an active share link of it and its token. */
+  snapshotId: string;
+  linkId: string;
+  shareToken: string;
+  /** The notebook as an upwell-notebook file, a valid import body. */
+  notebookFile: Record<string, unknown>;
 }
 
 /** Path parameter name → the id of group A's thing it names. */
@@ -61,6 +67,9 @@ export const PARAM_FIXTURES: Record<string, (w: World, path: string, p: People) 
   threadId: (w) => w.threadId,
   replyId: (w) => w.replyId,
   notificationId: (w) => w.notificationId,
+  snapshotId: (w) => w.snapshotId,
+  linkId: (w) => w.linkId,
+  token: (w) => w.shareToken,
 };
 
 /**
@@ -77,6 +86,12 @@ export type RouteRule = {
   multipart?: boolean;
   /** Fields holding lags and windows: negative or huge values must be refused (400). */
   lagFields?: string[];
+  /** Query string the route needs to be answerable at all. */
+  query?: Record<string, string>;
+  /** A public route that is open but may answer this status instead of 2xx (e.g. the demo list with the seed off). */
+  openStatus?: number;
+  /** The path parameter is itself the credential (a share token): whoever holds it is let in, outsiders too. */
+  capability?: boolean;
 } & (
   | { scope: 'public' | 'self' }
   | { scope: 'notebook'; action: NotebookAction }
@@ -160,6 +175,23 @@ export const ROUTE_RULES: Record<string, RouteRule> = {
   'POST /api/notifications/{notificationId}/read': { scope: 'custom', expect: (a) => (a === 'reader' ? 'ok' : 404) },
   'GET /api/notebooks/{notebookId}/document': { scope: 'notebook', action: 'read' },
   'POST /api/notebooks/{notebookId}/document/updates': { scope: 'notebook', action: 'edit', body: (w) => ({ update: w.documentUpdate }) },
+  // Snapshots and share links (issue 7): reads follow the notebook's roles, publishing and links are the lead author's.
+  'POST /api/notebooks/{notebookId}/snapshots': { scope: 'notebook', action: 'publish', body: () => ({ title: 'Walk snapshot', releaseNote: 'walked' }) },
+  'GET /api/notebooks/{notebookId}/snapshots': { scope: 'notebook', action: 'read' },
+  'GET /api/snapshots/{snapshotId}': { scope: 'notebook', action: 'read' },
+  'GET /api/snapshots/{snapshotId}/html': { scope: 'notebook', action: 'read' },
+  'GET /api/snapshots/{snapshotId}/compare': { scope: 'notebook', action: 'read', query: { with: 'live' } },
+  'POST /api/snapshots/{snapshotId}/share-links': { scope: 'notebook', action: 'publish', body: () => ({ expiresAt: null }) },
+  'GET /api/snapshots/{snapshotId}/share-links': { scope: 'notebook', action: 'publish' },
+  'DELETE /api/snapshots/{snapshotId}/share-links/{linkId}': { scope: 'notebook', action: 'publish' },
+  'GET /api/shared/{token}': { scope: 'public', capability: true },
+  'GET /api/shared/{token}/html': { scope: 'public', capability: true },
+  // Notebook files (issue 8): export follows read; importing makes a new notebook, as creating one does.
+  'GET /api/notebooks/{notebookId}/export': { scope: 'notebook', action: 'read' },
+  'POST /api/groups/{groupId}/notebooks/import': { scope: 'group', action: 'create-notebook', body: (w) => w.notebookFile },
+  // The demo accounts: public, and /api/demo answers 404 while the demo seed is off (as in this walk).
+  'GET /api/demo/status': { scope: 'public' },
+  'GET /api/demo': { scope: 'public', openStatus: 404 },
 };
 
 function commentOwnerOnly(a: Actor): 'ok' | 403 | 404 {
@@ -200,6 +232,9 @@ export async function buildWorld(url: string, p: People): Promise<World> {
   const replyId = (reply.replies?.at(-1)?.id ?? reply.id) as string;
   const notes = (await api.get('/api/notifications').set(p.reader.auth).expect(200)).body;
   const state = (await api.get(`${nbPath}/document`).set(p.lead.auth).expect(200)).body.state as string;
+  const snapshotId = (await api.post(`${nbPath}/snapshots`).set(p.lead.auth).send({ title: 'Walk v1' }).expect(201)).body.id as string;
+  const link = (await api.post(`/api/snapshots/${snapshotId}/share-links`).set(p.lead.auth).send({}).expect(201)).body;
+  const notebookFile = (await api.get(`${nbPath}/export`).set(p.lead.auth).expect(200)).body;
   return {
     groupId: group.id,
     notebookId: nb.id,
@@ -213,6 +248,10 @@ export async function buildWorld(url: string, p: People): Promise<World> {
     replyId,
     notificationId: notes.items[0].id,
     documentUpdate: paragraphUpdate(state),
+    snapshotId,
+    linkId: link.id,
+    shareToken: link.token,
+    notebookFile,
   };
 }
 
