@@ -1,3 +1,4 @@
+import { raw } from '@mikro-orm/core';
 import { EntityManager } from '@mikro-orm/sqlite';
 import { BadRequestException, Injectable, Logger } from '@nestjs/common';
 import type { DocumentState, DocumentUpdateResponse } from '@upwell/common';
@@ -100,7 +101,12 @@ export class DocumentsService {
   /** Folds the update log into the stored state and refreshes the JSON and text renderings. */
   async compact(notebookId: string, em: EntityManager): Promise<void> {
     await em.transactional(async (tx) => {
-      const stored = await tx.findOneOrFail(NotebookDocument, { notebook: notebookId });
+      // A write first takes SQLite's write lock (waiting out the busy timeout) before
+      // anything is read, so the log read below is the latest even when another
+      // process shares the file; read first, a deferred transaction would fail to
+      // upgrade once that process had appended. Only rows read here are deleted.
+      await tx.nativeUpdate(NotebookDocument, { notebook: notebookId }, { compactedThrough: raw('compacted_through') });
+      const stored = await tx.findOneOrFail(NotebookDocument, { notebook: notebookId }, { refresh: true });
       const updates = await tx.find(NotebookUpdate, { notebook: notebookId, id: { $gt: stored.compactedThrough } }, { orderBy: { id: 'asc' } });
       if (!updates.length) return;
       const merged = Y.mergeUpdates([stored.state, ...updates.map((u) => u.update)]);

@@ -5,6 +5,7 @@ import { SOCKET_CLOSE_REASONS, SOCKET_EVENTS } from '@upwell/common';
 import type { Server, Socket } from 'socket.io';
 import { AuthService } from '../auth/auth.service';
 import { GroupMembership } from '../groups/group.entity';
+import { ProcessFanout } from './process-fanout';
 import { groupRoom, RealtimeEvents, userRoom } from './realtime-events';
 
 /** Options of the app's one socket.io server; every gateway on it passes the same ones. */
@@ -32,10 +33,12 @@ export class RealtimeGateway implements OnGatewayInit, OnGatewayConnection {
     private readonly auth: AuthService,
     private readonly em: EntityManager,
     private readonly events: RealtimeEvents,
+    private readonly fanout: ProcessFanout,
   ) {}
 
   afterInit(server: Server): void {
     this.events.attach(server);
+    this.fanout.attach(server);
   }
 
   async handleConnection(socket: Socket): Promise<void> {
