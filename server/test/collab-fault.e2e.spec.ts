@@ -1,47 +1,12 @@
-import { spawn, type ChildProcess } from 'node:child_process';
+import type { ChildProcess } from 'node:child_process';
 import { existsSync, mkdtempSync, rmSync } from 'node:fs';
-import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
-import { join, resolve } from 'node:path';
+import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
+import { MAIN, startServer } from './child-server';
 import { DocClient, storedDoc, textsOf } from './collab-client';
 import { buildGroup, buildNotebook, buildUser } from './factories';
 import { eventually } from './socket-client';
-
-// The built server, as `npm start` runs it; `npm test` builds it first, this test builds nothing.
-const MAIN = resolve(__dirname, '../dist/main.js');
-
-function freePort(): Promise<number> {
-  return new Promise((ok, fail) => {
-    const srv = createServer();
-    srv.once('error', fail);
-    srv.listen(0, '127.0.0.1', () => {
-      const { port } = srv.address() as { port: number };
-      srv.close(() => ok(port));
-    });
-  });
-}
-
-/** Starts `node server/dist/main.js` on `dataDir` and waits until it answers. */
-async function startServer(dataDir: string): Promise<{ url: string; child: ChildProcess; log: () => string }> {
-  const port = await freePort();
-  let log = '';
-  const child = spawn(process.execPath, [MAIN], {
-    env: { ...process.env, PORT: String(port), DATA_DIR: dataDir, WEB_DIST: '', AUTH_ATTEMPTS_PER_MINUTE: '1000' },
-    stdio: ['ignore', 'pipe', 'pipe'],
-  });
-  child.stdout!.on('data', (d) => (log += d));
-  child.stderr!.on('data', (d) => (log += d));
-  const url = `http://127.0.0.1:${port}`;
-  const deadline = Date.now() + 30_000;
-  for (;;) {
-    if (child.exitCode !== null) throw new Error(`server exited early:\n${log}`);
-    if (await fetch(`${url}/api/health`).then((r) => r.ok, () => false)) break;
-    if (Date.now() > deadline) throw new Error(`server did not answer within 30 s:\n${log}`);
-    await new Promise((r) => setTimeout(r, 100));
-  }
-  return { url, child, log: () => log };
-}
 
 describe('a server killed mid-stream keeps every acknowledged edit', () => {
   const dataDir = mkdtempSync(join(tmpdir(), 'upwell-collab-fault-'));
