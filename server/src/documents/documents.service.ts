@@ -68,9 +68,11 @@ export class DocumentsService {
   /**
    * Checks an update against the current document and stores it. Used by HTTP
    * and by the socket gateway alike; the caller has already checked access.
+   * A caller holding the open room passes its document as `current`.
    */
-  async append(notebookId: string, update: Uint8Array, authorId: string | null, em: EntityManager = this.em): Promise<Date> {
-    const doc = await this.load(notebookId, em);
+  async append(notebookId: string, update: Uint8Array, authorId: string | null, em: EntityManager = this.em, current?: Y.Doc): Promise<Date> {
+    // `current`: the open room's document, which holds exactly what is stored; copying it spares reading the state and log.
+    const doc = current ? copyOf(current) : await this.load(notebookId, em);
     try {
       Y.applyUpdate(doc, update);
       renderDocument(doc);
@@ -120,4 +122,11 @@ export class DocumentsService {
       await tx.nativeDelete(NotebookUpdate, { notebook: notebookId, id: { $lte: stored.compactedThrough } });
     });
   }
+}
+
+/** An independent copy of a document, so checking an update against it leaves the original untouched. */
+function copyOf(doc: Y.Doc): Y.Doc {
+  const copy = new Y.Doc({ gc: true });
+  Y.applyUpdate(copy, Y.encodeStateAsUpdate(doc));
+  return copy;
 }
