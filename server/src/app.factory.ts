@@ -6,6 +6,7 @@ import { AppModule } from './app.module';
 import { installJsonBodyParser } from './common/body-parser';
 import { AllExceptionsFilter } from './common/all-exceptions.filter';
 import { loadAppConfig, type AppConfig } from './config/app-config';
+import { RedisIoAdapter } from './realtime/redis-io.adapter';
 
 /** A configured Upwell app, not yet listening. */
 export interface BuiltApp {
@@ -40,6 +41,17 @@ export async function buildApp(env: NodeJS.ProcessEnv = process.env, opts: { log
   app.setGlobalPrefix('api', { exclude: [] });
   app.useGlobalFilters(new AllExceptionsFilter());
   app.enableShutdownHooks();
+  if (config.redisUrl) {
+    // Before the gateways start: every socket room then spans all processes on this Redis.
+    const adapter = new RedisIoAdapter(app, config.redisUrl);
+    try {
+      await adapter.connectToRedis();
+    } catch (err) {
+      await app.close();
+      throw err;
+    }
+    app.useWebSocketAdapter(adapter);
+  }
   const doc = SwaggerModule.createDocument(
     app,
     new DocumentBuilder()

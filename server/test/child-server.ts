@@ -1,11 +1,11 @@
-import { spawn, type ChildProcess } from 'node:child_process';
+import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
 import { createServer } from 'node:net';
 import { resolve } from 'node:path';
 
-/** Fault tests' servers: `node server/dist/main.js` as child processes that can be killed and restarted on one DATA_DIR. */
-// The built server, as `npm start` runs it; `npm test` builds it first, this test builds nothing.
+/** The built server, as `npm start` runs it; `npm test` builds it first, the tests build nothing. */
 export const MAIN = resolve(__dirname, '../dist/main.js');
 
+/** A free TCP port on loopback. */
 export function freePort(): Promise<number> {
   return new Promise((ok, fail) => {
     const srv = createServer();
@@ -17,12 +17,19 @@ export function freePort(): Promise<number> {
   });
 }
 
-/** Starts `node server/dist/main.js` on `dataDir` and waits until it answers. */
-export async function startServer(dataDir: string): Promise<{ url: string; child: ChildProcess; log: () => string }> {
+/** A server running as its own Node process. */
+export interface ChildServer {
+  url: string;
+  child: ChildProcess;
+  log: () => string;
+}
+
+/** Starts `node server/dist/main.js` on `dataDir` (extra env on top) and waits until it answers. */
+export async function startServer(dataDir: string, env: Record<string, string> = {}): Promise<ChildServer> {
   const port = await freePort();
   let log = '';
   const child = spawn(process.execPath, [MAIN], {
-    env: { ...process.env, PORT: String(port), DATA_DIR: dataDir, WEB_DIST: '', AUTH_ATTEMPTS_PER_MINUTE: '1000' },
+    env: { ...process.env, PORT: String(port), DATA_DIR: dataDir, WEB_DIST: '', AUTH_ATTEMPTS_PER_MINUTE: '1000', SEED_DEMO: 'false', ...env },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   child.stdout!.on('data', (d) => (log += d));
@@ -36,4 +43,14 @@ export async function startServer(dataDir: string): Promise<{ url: string; child
     await new Promise((r) => setTimeout(r, 100));
   }
   return { url, child, log: () => log };
+}
+
+/** Runs the built server to its end (for starts that must fail) and returns its exit code and output. */
+export function runServerToExit(dataDir: string, env: Record<string, string>, timeoutMs = 20_000): { status: number | null; output: string } {
+  const r = spawnSync(process.execPath, [MAIN], {
+    env: { ...process.env, PORT: '0', DATA_DIR: dataDir, WEB_DIST: '', SEED_DEMO: 'false', ...env },
+    encoding: 'utf8',
+    timeout: timeoutMs,
+  });
+  return { status: r.status, output: `${r.stdout}${r.stderr}` };
 }

@@ -3,6 +3,7 @@ import { existsSync, mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
+import { MAIN, startServer } from './child-server';
 import { DocClient, storedDoc, textsOf } from './collab-client';
 import { buildGroup, buildNotebook, buildUser } from './factories';
 import { MAIN, startServer } from './child-server';

@@ -11,6 +11,7 @@ import { DocumentSessions } from './document-sessions';
 import { DocumentWriter } from './document-writer';
 import { RoomMembership } from './room-membership';
 import { HttpEditsThroughRooms } from './http-edits-through-rooms';
+import { CrossProcessRooms } from './cross-process-rooms';
 
 /**
  * Real-time co-editing of notebook documents: rooms of live Yjs documents,
@@ -20,7 +21,7 @@ import { HttpEditsThroughRooms } from './http-edits-through-rooms';
  */
 @Module({
   imports: [DocumentsModule, NotebookAccessModule],
-  providers: [DocumentGateway, DocumentSessions, DocumentMessages, DocumentRooms, DocumentWriter, DocumentBroadcast, AwarenessRelay, RoomMembership, DocumentAccess, HttpEditsThroughRooms],
+  providers: [DocumentGateway, DocumentSessions, DocumentMessages, DocumentRooms, DocumentWriter, DocumentBroadcast, AwarenessRelay, RoomMembership, DocumentAccess, HttpEditsThroughRooms, CrossProcessRooms],
   exports: [DocumentAccess, DocumentRooms, DocumentWriter],
 })
 export class CollaborationModule {}

@@ -1,9 +1,10 @@
 import { EntityManager } from '@mikro-orm/sqlite';
 import { RequestContext } from '@mikro-orm/core';
-import { Injectable, Logger } from '@nestjs/common';
+import { Injectable, Logger, type OnModuleInit } from '@nestjs/common';
 import { DOC_EVENTS, type DocRefused, type NotebookRole } from '@upwell/common';
 import type { Socket } from 'socket.io';
 import { NotebookPolicy } from '../notebooks/notebook.policy';
+import { PROCESS_EVENTS, ProcessFanout } from '../realtime/process-fanout';
 import { authenticatedUserId } from '../realtime/realtime.gateway';
 import { DocumentRooms } from './document-rooms';
 import { RoomMembership } from './room-membership';
@@ -21,7 +22,7 @@ export interface AccessChange {
  * at once and closes the document for anyone who lost their role.
  */
 @Injectable()
-export class DocumentAccess {
+export class DocumentAccess implements OnModuleInit {
   private readonly logger = new Logger('DocumentAccess');
   /** Bumped by every re-check, so a join that raced one looks again. */
   private epoch = 0;
@@ -31,7 +32,17 @@ export class DocumentAccess {
     private readonly policy: NotebookPolicy,
     private readonly rooms: DocumentRooms,
     private readonly membership: RoomMembership,
+    private readonly fanout: ProcessFanout,
   ) {}
+
+  onModuleInit(): void {
+    // Another process changed roles: re-check the sockets this one holds.
+    this.fanout.on(PROCESS_EVENTS.accessChanged, (change) => {
+      const { userId, notebookId } = (change ?? {}) as AccessChange;
+      if ((userId !== undefined && typeof userId !== 'string') || (notebookId !== undefined && typeof notebookId !== 'string')) return;
+      this.recheck({ userId, notebookId }).catch((err) => this.logger.error(`re-checking access for another process failed: ${err}`));
+    });
+  }
 
   /** The signed-in person behind the socket (the app gateway checked the token), or null. */
   async userOf(socket: Socket): Promise<string | null> {
@@ -53,9 +64,15 @@ export class DocumentAccess {
    * Call after roles changed (and were committed): every affected socket
    * following a document gets its role looked up again; one that lost it gets
    * `doc:access-revoked` and leaves the room, one that was downgraded is
-   * refused edits from now on.
+   * refused edits from now on. Sockets on other processes are re-checked by
+   * their own process.
    */
   async accessChanged(change: AccessChange): Promise<void> {
+    this.fanout.toOthers(PROCESS_EVENTS.accessChanged, change);
+    await this.recheck(change);
+  }
+
+  private async recheck(change: AccessChange): Promise<void> {
     this.epoch += 1;
     for (const room of this.rooms.all()) {
       if (change.notebookId && room.notebookId !== change.notebookId) continue;

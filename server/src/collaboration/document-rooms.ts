@@ -28,6 +28,11 @@ export class DocumentRooms implements OnModuleDestroy {
     return this.rooms.get(notebookId);
   }
 
+  /** The room's load in progress, if it is being loaded right now. */
+  loadingRoom(notebookId: string): Promise<DocumentRoom> | undefined {
+    return this.loading.get(notebookId);
+  }
+
   /** Every loaded room (for access re-checks and benches). */
   all(): DocumentRoom[] {
     return [...this.rooms.values()];

@@ -53,7 +53,7 @@ export class DocumentWriter {
     try {
       while (room.pendingWrites.length) {
         const batch = room.pendingWrites.splice(0);
-        const stored = await this.store(room.notebookId, batch);
+        const stored = await this.store(room, batch);
         for (const [i, w] of batch.entries()) {
           if (stored[i] !== true) {
             w.done(stored[i]);
@@ -70,9 +70,10 @@ export class DocumentWriter {
   }
 
   /** Appends the batch as one merged update; if that is refused, each on its own so one bad update refuses only itself. */
-  private async store(notebookId: string, batch: PendingWrite[]): Promise<(true | unknown)[]> {
-    // Each append gets its own EntityManager: socket handlers have no request context.
-    const append = (update: Uint8Array, author: string | null) => this.documents.append(notebookId, update, author, this.em.fork());
+  private async store(room: DocumentRoom, batch: PendingWrite[]): Promise<(true | unknown)[]> {
+    // Each append gets its own EntityManager: socket handlers have no request context. The room's
+    // doc holds exactly what is stored, so the update is checked against it rather than a reload.
+    const append = (update: Uint8Array, author: string | null) => this.documents.append(room.notebookId, update, author, this.em.fork(), room.doc);
     if (batch.length > 1) {
       const authors = new Set(batch.map((w) => w.authorId));
       try {

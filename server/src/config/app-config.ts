@@ -1,5 +1,5 @@
 import { randomBytes } from 'node:crypto';
-import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { existsSync, linkSync, mkdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 
 /** Settings the server runs with, read once from the environment at start. */
@@ -21,6 +21,8 @@ export interface AppConfig {
   seedDemo: boolean;
   /** The one foreign origin browsers may call the API and socket from (CORS); the app's own address by default. */
   appOrigin: string;
+  /** Redis for socket fan-out across several server processes, or null for one process alone. */
+  redisUrl: string | null;
 }
 
 /** Name under which the config is registered with @nestjs/config. */
@@ -47,9 +49,43 @@ function jwtSecret(dataDir: string, given: string | undefined): string {
   const file = join(dir, 'jwt-secret');
   if (existsSync(file)) return readFileSync(file, 'utf8').trim();
   mkdirSync(dir, { recursive: true, mode: 0o700 });
-  const secret = randomBytes(48).toString('base64url');
-  writeFileSync(file, secret + '\n', { mode: 0o600, flag: 'wx' });
-  return secret;
+  // Written aside, then linked into place: link() fails if the file exists, so two
+  // processes starting at once on one DATA_DIR agree on whichever secret landed first,
+  // and neither can read a half-written file.
+  const draft = `${file}.${process.pid}.${randomBytes(4).toString('hex')}`;
+  writeFileSync(draft, randomBytes(48).toString('base64url') + '\n', { mode: 0o600, flag: 'wx' });
+  try {
+    linkSync(draft, file);
+  } catch (err) {
+    if ((err as NodeJS.ErrnoException).code !== 'EEXIST') throw err;
+  } finally {
+    rmSync(draft, { force: true });
+  }
+  return readFileSync(file, 'utf8').trim();
+}
+
+/** REDIS_URL if given, checked to be a redis:// or rediss:// address. */
+function redisUrl(raw: string | undefined): string | null {
+  if (!raw) return null;
+  let url: URL;
+  try {
+    url = new URL(raw);
+  } catch {
+    throw new Error(`REDIS_URL must be a URL such as redis://127.0.0.1:6379, got "${withoutPassword(raw)}"`);
+  }
+  if (url.protocol !== 'redis:' && url.protocol !== 'rediss:') throw new Error(`REDIS_URL must start with redis:// or rediss://, got "${withoutPassword(raw)}"`);
+  return raw;
+}
+
+/** A Redis address fit for a log line: any password replaced by ***. */
+export function withoutPassword(raw: string): string {
+  try {
+    const url = new URL(raw);
+    if (url.password) url.password = '***';
+    return url.toString();
+  } catch {
+    return raw.replace(/\/\/[^@/]*@/, '//***@');
+  }
 }
 
 function seedDemo(raw: string | undefined): boolean {
@@ -88,5 +124,6 @@ export function loadAppConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     uploadMaxBytes: positiveInt('UPLOAD_MAX_BYTES', env.UPLOAD_MAX_BYTES, 2 * 1024 ** 3),
     seedDemo: seedDemo(env.SEED_DEMO),
     appOrigin: origin(env.APP_ORIGIN, `http://localhost:${port}`),
+    redisUrl: redisUrl(env.REDIS_URL),
   };
 }

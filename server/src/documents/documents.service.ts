@@ -1,3 +1,4 @@
+import { raw } from '@mikro-orm/core';
 import { EntityManager } from '@mikro-orm/sqlite';
 import { BadRequestException, Injectable, Logger } from '@nestjs/common';
 import type { DocumentState, DocumentUpdateResponse } from '@upwell/common';
@@ -67,9 +68,11 @@ export class DocumentsService {
   /**
    * Checks an update against the current document and stores it. Used by HTTP
    * and by the socket gateway alike; the caller has already checked access.
+   * A caller holding the open room passes its document as `current`.
    */
-  async append(notebookId: string, update: Uint8Array, authorId: string | null, em: EntityManager = this.em): Promise<Date> {
-    const doc = await this.load(notebookId, em);
+  async append(notebookId: string, update: Uint8Array, authorId: string | null, em: EntityManager = this.em, current?: Y.Doc): Promise<Date> {
+    // `current`: the open room's document, which holds exactly what is stored; copying it spares reading the state and log.
+    const doc = current ? copyOf(current) : await this.load(notebookId, em);
     try {
       Y.applyUpdate(doc, update);
       renderDocument(doc);
@@ -100,7 +103,12 @@ export class DocumentsService {
   /** Folds the update log into the stored state and refreshes the JSON and text renderings. */
   async compact(notebookId: string, em: EntityManager): Promise<void> {
     await em.transactional(async (tx) => {
-      const stored = await tx.findOneOrFail(NotebookDocument, { notebook: notebookId });
+      // A write first takes SQLite's write lock (waiting out the busy timeout) before
+      // anything is read, so the log read below is the latest even when another
+      // process shares the file; read first, a deferred transaction would fail to
+      // upgrade once that process had appended. Only rows read here are deleted.
+      await tx.nativeUpdate(NotebookDocument, { notebook: notebookId }, { compactedThrough: raw('compacted_through') });
+      const stored = await tx.findOneOrFail(NotebookDocument, { notebook: notebookId }, { refresh: true });
       const updates = await tx.find(NotebookUpdate, { notebook: notebookId, id: { $gt: stored.compactedThrough } }, { orderBy: { id: 'asc' } });
       if (!updates.length) return;
       const merged = Y.mergeUpdates([stored.state, ...updates.map((u) => u.update)]);
@@ -114,4 +122,11 @@ export class DocumentsService {
       await tx.nativeDelete(NotebookUpdate, { notebook: notebookId, id: { $lte: stored.compactedThrough } });
     });
   }
+}
+
+/** An independent copy of a document, so checking an update against it leaves the original untouched. */
+function copyOf(doc: Y.Doc): Y.Doc {
+  const copy = new Y.Doc({ gc: true });
+  Y.applyUpdate(copy, Y.encodeStateAsUpdate(doc));
+  return copy;
 }

@@ -8,6 +8,7 @@ import { AuthService } from '../auth/auth.service';
 import { isAllowedOrigin } from '../common/same-origin';
 import { APP_CONFIG, type AppConfig } from '../config/app-config';
 import { GroupMembership } from '../groups/group.entity';
+import { ProcessFanout } from './process-fanout';
 import { groupRoom, RealtimeEvents, userRoom } from './realtime-events';
 
 /** Options of the app's one socket.io server; every gateway on it passes the same ones. */
@@ -36,6 +37,7 @@ export class RealtimeGateway implements OnGatewayInit, OnGatewayConnection {
     private readonly em: EntityManager,
     private readonly events: RealtimeEvents,
     private readonly config: ConfigService,
+    private readonly fanout: ProcessFanout,
   ) {}
 
   afterInit(server: Server): void {
@@ -44,6 +46,7 @@ export class RealtimeGateway implements OnGatewayInit, OnGatewayConnection {
     const appOrigin = this.config.getOrThrow<AppConfig>(APP_CONFIG).appOrigin;
     server.engine.opts.allowRequest = (req, done) =>
       isAllowedOrigin(req.headers.origin, req.headers.host, appOrigin) ? done(null, true) : done('this origin may not open the socket', false);
+    this.fanout.attach(server);
   }
 
   async handleConnection(socket: Socket): Promise<void> {

@@ -1,9 +1,10 @@
 import { Global, Module } from '@nestjs/common';
 import { AuthModule } from '../auth/auth.module';
+import { ProcessFanout } from './process-fanout';
 import { RealtimeEvents } from './realtime-events';
 import { RealtimeGateway } from './realtime.gateway';
 
-/** The socket and the events services push through it. */
+/** The socket, the events services push through it, and messages between server processes. */
 @Global()
-@Module({ imports: [AuthModule], providers: [RealtimeGateway, RealtimeEvents], exports: [RealtimeEvents] })
+@Module({ imports: [AuthModule], providers: [RealtimeGateway, RealtimeEvents, ProcessFanout], exports: [RealtimeEvents, ProcessFanout] })
 export class RealtimeModule {}
