@@ -6,7 +6,6 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { MAIN, startServer } from './child-server';
 import { DocClient, storedDoc, textsOf } from './collab-client';
 import { buildGroup, buildNotebook, buildUser } from './factories';
-import { MAIN, startServer } from './child-server';
 import { eventually } from './socket-client';
 
 describe('a server killed mid-stream keeps every acknowledged edit', () => {
