@@ -12,3 +12,6 @@ export * from './documents';
 export * from './checkpoints';
 export * from './comments';
 export * from './notifications';
+// E-mail and invitations.
+export * from './invitations';
+export * from './mail';

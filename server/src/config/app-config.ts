@@ -17,6 +17,16 @@ export interface AppConfig {
   authAttemptsPerMinute: number;
   /** Largest upload accepted, in bytes (streamed to disk, never held in memory). */
   uploadMaxBytes: number;
+  /** Outgoing SMTP server, or null to start the in-process mail catcher instead. */
+  smtpUrl: string | null;
+  /** Sender of every mail Upwell sends. */
+  mailFrom: string;
+  /** Where people reach the web app; links in mail start here (no trailing slash). */
+  appUrl: string;
+  /** How long an invitation link stays valid, in hours. */
+  invitationTtlHours: number;
+  /** Invitations one person may send per hour. */
+  invitationsPerHour: number;
 }
 
 /** Name under which the config is registered with @nestjs/config. */
@@ -48,6 +58,22 @@ function jwtSecret(dataDir: string, given: string | undefined): string {
   return secret;
 }
 
+function mailConfig(env: NodeJS.ProcessEnv) {
+  const smtpUrl = env.SMTP_URL || null;
+  if (smtpUrl && !/^smtps?:\/\//.test(smtpUrl)) throw new Error(`SMTP_URL must start with smtp:// or smtps://, got "${smtpUrl}"`);
+  const appUrl = (env.APP_URL || `http://localhost:${positiveInt('PORT', env.PORT, 3000)}`).replace(/\/+$/, '');
+  if (!/^https?:\/\//.test(appUrl)) throw new Error(`APP_URL must start with http:// or https://, got "${appUrl}"`);
+  const ttl = positiveInt('INVITATION_TTL_HOURS', env.INVITATION_TTL_HOURS, 7 * 24);
+  if (ttl < 1) throw new Error('INVITATION_TTL_HOURS must be at least 1');
+  return {
+    smtpUrl,
+    mailFrom: env.MAIL_FROM || 'Upwell <no-reply@upwell.localhost>',
+    appUrl,
+    invitationTtlHours: ttl,
+    invitationsPerHour: positiveInt('INVITATIONS_PER_HOUR', env.INVITATIONS_PER_HOUR, 30),
+  };
+}
+
 /** Reads and checks the environment; creates DATA_DIR and the secret if missing. */
 export function loadAppConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
   const dataDir = resolve(env.DATA_DIR || './data');
@@ -63,5 +89,6 @@ export function loadAppConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     webDist: webDist && existsSync(join(webDist, 'index.html')) ? webDist : null,
     authAttemptsPerMinute: positiveInt('AUTH_ATTEMPTS_PER_MINUTE', env.AUTH_ATTEMPTS_PER_MINUTE, 20),
     uploadMaxBytes: positiveInt('UPLOAD_MAX_BYTES', env.UPLOAD_MAX_BYTES, 2 * 1024 ** 3),
+    ...mailConfig(env),
   };
 }
