@@ -22,6 +22,10 @@ import { CollaborationModule } from './collaboration/collaboration.module';
 import { CheckpointsModule } from './checkpoints/checkpoints.module';
 import { CommentsModule } from './comments/comments.module';
 import { NotificationsModule } from './notifications/notifications.module';
+// E-mail and invitations.
+import { EventEmitterModule } from '@nestjs/event-emitter';
+import { MailModule } from './mail/mail.module';
+import { InvitationsModule } from './invitations/invitations.module';
 
 /** The whole server, built for one resolved configuration. */
 @Module({})
@@ -54,6 +58,10 @@ export class AppModule {
         CheckpointsModule,
         CommentsModule,
         NotificationsModule,
+        // E-mail and invitations.
+        EventEmitterModule.forRoot(),
+        MailModule,
+        InvitationsModule,
       ],
       controllers: [HealthController],
       providers: [MigrateOnStart],

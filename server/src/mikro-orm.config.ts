@@ -13,9 +13,10 @@ import { Checkpoint } from './checkpoints/checkpoint.entity';
 import { CommentReply, CommentThread } from './comments/comment.entity';
 import { Notification } from './notifications/notification.entity';
 import { migrationsList } from './migrations';
+import { Invitation } from './invitations/invitation.entity';
 
 /** Every entity the server stores; new modules add theirs here. */
-export const ENTITIES = [User, Group, GroupMembership, Notebook, NotebookRoleAssignment, UploadedFile, Series, SeriesVersion, GriddedField, ZonalMeanField, NotebookDocument, NotebookUpdate, EventSet, Checkpoint, CommentThread, CommentReply, Notification];
+export const ENTITIES = [User, Group, GroupMembership, Notebook, NotebookRoleAssignment, UploadedFile, Series, SeriesVersion, GriddedField, ZonalMeanField, NotebookDocument, NotebookUpdate, EventSet, Checkpoint, CommentThread, CommentReply, Notification, /* mail */ Invitation];
 
 /** MikroORM options for the SQLite file at `databaseFile`. */
 export function buildOrmOptions(databaseFile: string): Options {

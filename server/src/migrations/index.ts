@@ -4,6 +4,7 @@ import { Migration20261201190750 } from './Migration20261201190750';
 import { Migration20261201193518 } from './Migration20261201193518';
 import { Migration20261201200734 } from './Migration20261201200734';
 import { Migration20261201201010 } from './Migration20261201201010';
+import { Migration20261201220000 } from './Migration20261201220000';
 
 /**
  * Every migration, oldest first. Create one with `npm run migration:create -w server`
@@ -20,4 +21,6 @@ export const migrationsList: MigrationObject[] = [
   { name: 'Migration20261201200734', class: Migration20261201200734 },
   // Named checkpoints of notebook documents (version history).
   { name: 'Migration20261201201010', class: Migration20261201201010 },
+  // Invitations by e-mail, and each person's notification-mail setting.
+  { name: 'Migration20261201220000', class: Migration20261201220000 },
 ];
