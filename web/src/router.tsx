@@ -9,6 +9,8 @@ import SeriesPage from './pages/Series';
 import SeriesLibraryPage from './pages/SeriesLibrary';
 import SignInPage from './pages/SignIn';
 import SignUpPage from './pages/SignUp';
+// E-mail and invitations.
+import InvitationPage from './pages/Invitation';
 
 // The editor (Tiptap, ProseMirror, Yjs) loads with the first notebook opened, not with the sign-in page.
 const NotebookPage = lazy(() => import('./pages/Notebook'));
@@ -17,6 +19,7 @@ const NotebookPage = lazy(() => import('./pages/Notebook'));
 export const routes = [
   { path: '/sign-in', element: <SignInPage /> },
   { path: '/sign-up', element: <SignUpPage /> },
+  { path: '/invitations/:token', element: <InvitationPage /> },
   {
     path: '/',
     element: <AppShell />,
