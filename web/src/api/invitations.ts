@@ -1,5 +1,5 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { AcceptInvitationRequest, AcceptInvitationResponse, InvitationPreview, MeResponse } from '@upwell/common';
+import type { AcceptInvitationRequest, AcceptInvitationResponse, CreatedInvitationView, InvitationList, InvitationPreview, MeResponse } from '@upwell/common';
 import { authKeys } from './auth';
 import { api, setToken } from './client';
 
@@ -23,4 +23,18 @@ export function useAcceptInvitation(token: string) {
       await qc.fetchQuery({ queryKey: authKeys.me, queryFn: () => api<MeResponse>('/auth/me') });
     },
   });
+}
+
+/** Pending invitations of a group (`/groups/:id`) or a notebook (`/notebooks/:id`), with send and revoke. */
+export function useInvitations(base: string) {
+  const qc = useQueryClient();
+  const key = ['invitations', base];
+  const list = useQuery({ queryKey: key, queryFn: () => api<InvitationList>(`${base}/invitations`) });
+  const done = () => qc.invalidateQueries({ queryKey: key });
+  const send = useMutation({
+    mutationFn: (body: { email: string; role: string }) => api<CreatedInvitationView>(`${base}/invitations`, { method: 'POST', body }),
+    onSuccess: done,
+  });
+  const revoke = useMutation({ mutationFn: (id: string) => api<void>(`${base}/invitations/${id}`, { method: 'DELETE' }), onSuccess: done });
+  return { list, send, revoke };
 }
