@@ -11,6 +11,7 @@ import SignInPage from './pages/SignIn';
 import SignUpPage from './pages/SignUp';
 // E-mail and invitations.
 import InvitationPage from './pages/Invitation';
+import MailOutboxPage from './pages/MailOutbox';
 
 // The editor (Tiptap, ProseMirror, Yjs) loads with the first notebook opened, not with the sign-in page.
 const NotebookPage = lazy(() => import('./pages/Notebook'));
@@ -38,6 +39,7 @@ export const routes = [
       { path: 'series/:seriesId', element: <SeriesPage /> },
       { path: 'group', element: <GroupPage /> },
       { path: 'account', element: <AccountPage /> },
+      { path: 'mail', element: <MailOutboxPage /> },
       { path: '*', element: <Navigate to="/notebooks" replace /> },
     ],
   },

@@ -1,5 +1,5 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { AcceptInvitationRequest, AcceptInvitationResponse, CreatedInvitationView, InvitationList, InvitationPreview, MeResponse } from '@upwell/common';
+import type { AcceptInvitationRequest, AcceptInvitationResponse, CreatedInvitationView, InvitationList, InvitationPreview, MailOutbox, MailStatus, MeResponse } from '@upwell/common';
 import { authKeys } from './auth';
 import { api, setToken } from './client';
 
@@ -37,4 +37,14 @@ export function useInvitations(base: string) {
   });
   const revoke = useMutation({ mutationFn: (id: string) => api<void>(`${base}/invitations/${id}`, { method: 'DELETE' }), onSuccess: done });
   return { list, send, revoke };
+}
+
+/** Whether the local mail catcher is in use (only then is there an outbox to show). */
+export function useMailStatus(enabled: boolean) {
+  return useQuery({ queryKey: ['mail-status'], queryFn: () => api<MailStatus>('/mail/status'), enabled, staleTime: Infinity });
+}
+
+/** The captured mail of the groups the person administers. */
+export function useMailOutbox() {
+  return useQuery({ queryKey: ['mail-outbox'], queryFn: () => api<MailOutbox>('/mail/outbox'), refetchInterval: 5000 });
 }
