@@ -27,6 +27,9 @@ import { SnapshotsModule } from './snapshots/snapshots.module';
 // Notebook files and the demo (issue 8)
 import { NotebookFilesModule } from './notebook-files/notebook-files.module';
 import { DemoModule } from './demo/demo.module';
+// E-mail and invitations.
+import { MailModule } from './mail/mail.module';
+import { InvitationsModule } from './invitations/invitations.module';
 
 /** The whole server, built for one resolved configuration. */
 @Module({})
@@ -64,6 +67,9 @@ export class AppModule {
         SnapshotsModule,
         NotebookFilesModule,
         DemoModule,
+        // E-mail and invitations.
+        MailModule,
+        InvitationsModule,
       ],
       controllers: [HealthController],
       providers: [MigrateOnStart],

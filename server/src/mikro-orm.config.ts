@@ -14,11 +14,14 @@ import { CommentReply, CommentThread } from './comments/comment.entity';
 import { Notification } from './notifications/notification.entity';
 import { migrationsList } from './migrations';
 import { ShareLink, Snapshot } from './snapshots/snapshot.entity';
+import { Invitation } from './invitations/invitation.entity';
 
 /** Every entity the server stores; new modules add theirs here. */
 export const ENTITIES = [User, Group, GroupMembership, Notebook, NotebookRoleAssignment, UploadedFile, Series, SeriesVersion, GriddedField, ZonalMeanField, NotebookDocument, NotebookUpdate, EventSet, Checkpoint, CommentThread, CommentReply, Notification,
   // Snapshots
-  Snapshot, ShareLink];
+  Snapshot, ShareLink,
+  // E-mail invitations
+  Invitation];
 
 /** MikroORM options for the SQLite file at `databaseFile`. */
 export function buildOrmOptions(databaseFile: string): Options {

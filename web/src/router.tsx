@@ -9,6 +9,9 @@ import SeriesPage from './pages/Series';
 import SeriesLibraryPage from './pages/SeriesLibrary';
 import SignInPage from './pages/SignIn';
 import SignUpPage from './pages/SignUp';
+// E-mail and invitations.
+import InvitationPage from './pages/Invitation';
+import MailOutboxPage from './pages/MailOutbox';
 
 // The editor (Tiptap, ProseMirror, Yjs) loads with the first notebook opened, not with the sign-in page.
 const NotebookPage = lazy(() => import('./pages/Notebook'));
@@ -24,6 +27,7 @@ export const routes = [
   { path: '/sign-up', element: <SignUpPage /> },
   // A share link opens without signing in, outside the app shell's redirect.
   { path: '/shared/:token', element: lazyPage(<SharedSnapshotPage />) },
+  { path: '/invitations/:token', element: <InvitationPage /> },
   {
     path: '/',
     element: <AppShell />,
@@ -44,6 +48,7 @@ export const routes = [
       { path: 'series/:seriesId', element: <SeriesPage /> },
       { path: 'group', element: <GroupPage /> },
       { path: 'account', element: <AccountPage /> },
+      { path: 'mail', element: <MailOutboxPage /> },
       { path: '*', element: <Navigate to="/notebooks" replace /> },
     ],
   },

@@ -57,12 +57,17 @@ export type AuthResponse = z.infer<typeof authResponseSchema>;
 /** Answer of GET /api/auth/me: the signed-in person and their groups. */
 export const meResponseSchema = userSchema.extend({
   createdAt: z.string(),
+  /** Whether notification mail (snapshots published, mentions) is sent; invitations always are. */
+  emailNotifications: z.boolean(),
   groups: z.array(groupSummarySchema),
 });
 export type MeResponse = z.infer<typeof meResponseSchema>;
 
 /** Body of PATCH /api/users/me. */
-export const updateMeRequestSchema = z.strictObject({
-  name: registerRequestSchema.shape.name,
-});
+export const updateMeRequestSchema = z
+  .strictObject({
+    name: registerRequestSchema.shape.name.optional(),
+    emailNotifications: z.boolean({ error: 'emailNotifications must be true or false' }).optional(),
+  })
+  .refine((b) => b.name !== undefined || b.emailNotifications !== undefined, 'send a name, emailNotifications or both');
 export type UpdateMeRequest = z.infer<typeof updateMeRequestSchema>;

@@ -16,3 +16,6 @@ export * from './snapshots';
 // Notebook files and the demo (issue 8)
 export * from './notebook-file';
 export * from './demo';
+// E-mail and invitations.
+export * from './invitations';
+export * from './mail';

@@ -23,6 +23,16 @@ export interface AppConfig {
   appOrigin: string;
   /** Redis for socket fan-out across several server processes, or null for one process alone. */
   redisUrl: string | null;
+  /** Outgoing SMTP server, or null to start the in-process mail catcher instead. */
+  smtpUrl: string | null;
+  /** Sender of every mail Upwell sends. */
+  mailFrom: string;
+  /** Where people reach the web app; links in mail start here (no trailing slash). */
+  appUrl: string;
+  /** How long an invitation link stays valid, in hours. */
+  invitationTtlHours: number;
+  /** Invitations one person may send per hour. */
+  invitationsPerHour: number;
 }
 
 /** Name under which the config is registered with @nestjs/config. */
@@ -106,6 +116,22 @@ function origin(raw: string | undefined, fallback: string): string {
   return url.origin;
 }
 
+function mailConfig(env: NodeJS.ProcessEnv) {
+  const smtpUrl = env.SMTP_URL || null;
+  if (smtpUrl && !/^smtps?:\/\//.test(smtpUrl)) throw new Error(`SMTP_URL must start with smtp:// or smtps://, got "${smtpUrl}"`);
+  const appUrl = (env.APP_URL || `http://localhost:${positiveInt('PORT', env.PORT, 3000)}`).replace(/\/+$/, '');
+  if (!/^https?:\/\//.test(appUrl)) throw new Error(`APP_URL must start with http:// or https://, got "${appUrl}"`);
+  const ttl = positiveInt('INVITATION_TTL_HOURS', env.INVITATION_TTL_HOURS, 7 * 24);
+  if (ttl < 1) throw new Error('INVITATION_TTL_HOURS must be at least 1');
+  return {
+    smtpUrl,
+    mailFrom: env.MAIL_FROM || 'Upwell <no-reply@upwell.localhost>',
+    appUrl,
+    invitationTtlHours: ttl,
+    invitationsPerHour: positiveInt('INVITATIONS_PER_HOUR', env.INVITATIONS_PER_HOUR, 30),
+  };
+}
+
 /** Reads and checks the environment; creates DATA_DIR and the secret if missing. */
 export function loadAppConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
   const dataDir = resolve(env.DATA_DIR || './data');
@@ -125,5 +151,6 @@ export function loadAppConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     seedDemo: seedDemo(env.SEED_DEMO),
     appOrigin: origin(env.APP_ORIGIN, `http://localhost:${port}`),
     redisUrl: redisUrl(env.REDIS_URL),
+    ...mailConfig(env),
   };
 }

@@ -5,6 +5,7 @@ import { Migration20261201193518 } from './Migration20261201193518';
 import { Migration20261201200734 } from './Migration20261201200734';
 import { Migration20261201201010 } from './Migration20261201201010';
 import { Migration20261201214631 } from './Migration20261201214631';
+import { Migration20261201220000 } from './Migration20261201220000';
 
 /**
  * Every migration, oldest first. Create one with `npm run migration:create -w server`
@@ -23,4 +24,6 @@ export const migrationsList: MigrationObject[] = [
   { name: 'Migration20261201201010', class: Migration20261201201010 },
   // Published snapshots of notebooks (frozen payload) and their share links.
   { name: 'Migration20261201214631', class: Migration20261201214631 },
+  // Invitations by e-mail, and each person's notification-mail setting.
+  { name: 'Migration20261201220000', class: Migration20261201220000 },
 ];

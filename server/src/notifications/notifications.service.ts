@@ -1,8 +1,10 @@
 import { EntityManager } from '@mikro-orm/sqlite';
 import { Injectable, NotFoundException } from '@nestjs/common';
+import { EventEmitter2 } from '@nestjs/event-emitter';
 import { COMMENT_LIMITS, NOTIFICATIONS_PAGE, SOCKET_EVENTS, type NotificationCreatedEvent, type NotificationList, type NotificationView } from '@upwell/common';
 import type { CommentThread } from '../comments/comment.entity';
 import { NotebookRoleAssignment } from '../notebooks/notebook.entity';
+import { MAIL_EVENTS, type MentionsCreatedEvent } from '../mail/mail-events';
 import { RealtimeEvents } from '../realtime/realtime-events';
 import { User } from '../users/user.entity';
 import { Notification } from './notification.entity';
@@ -23,6 +25,7 @@ export class NotificationsService {
   constructor(
     private readonly em: EntityManager,
     private readonly events: RealtimeEvents,
+    private readonly emitter: EventEmitter2,
   ) {}
 
   /**
@@ -35,8 +38,12 @@ export class NotificationsService {
     );
   }
 
-  /** Tells each recipient, on their own socket room, that they have something new. */
+  /** Tells each recipient, on their own socket room, that they have something new (and by mail, unless they opted out). */
   async announce(created: readonly Notification[]): Promise<void> {
+    if (created.length) {
+      const mentioned: MentionsCreatedEvent = { notificationIds: created.map((n) => n.id) };
+      this.emitter.emit(MAIL_EVENTS.mentionsCreated, mentioned);
+    }
     for (const n of created) {
       const unread = await this.unreadCount(n.recipient.id);
       const event: NotificationCreatedEvent = { notificationId: n.id, unread };

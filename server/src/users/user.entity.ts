@@ -4,7 +4,7 @@ import { randomUUID } from 'node:crypto';
 /** A person with an Upwell account. */
 @Entity({ tableName: 'users' })
 export class User {
-  [OptionalProps]?: 'tokenVersion' | 'createdAt';
+  [OptionalProps]?: 'tokenVersion' | 'createdAt' | 'emailNotifications';
 
   @PrimaryKey({ type: 'string', length: 36 })
   id: string = randomUUID();
@@ -22,6 +22,10 @@ export class User {
   /** Raised on sign-out: tokens carry it, and older ones stop working. */
   @Property({ type: 'integer', default: 0 })
   tokenVersion: number = 0;
+
+  /** Whether notification mail (snapshots, mentions) is sent to this person; invitations always are. */
+  @Property({ type: 'boolean', default: true })
+  emailNotifications: boolean = true;
 
   @Property({ type: 'datetime' })
   createdAt: Date = new Date();

@@ -14,7 +14,7 @@ export class UsersController {
   constructor(private readonly users: UsersService) {}
 
   @Patch('me')
-  @ApiOperation({ summary: 'Change the signed-in person’s display name' })
+  @ApiOperation({ summary: 'Change the signed-in person’s display name or notification-mail setting' })
   @ApiJsonBody(updateMeRequestSchema)
   updateMe(@CurrentUser() user: User, @Body(new ZodValidationPipe(updateMeRequestSchema)) body: UpdateMeRequest) {
     return this.users.updateMe(user, body);

@@ -15,12 +15,14 @@ export class UsersService {
     return {
       ...presentUser(user),
       createdAt: user.createdAt.toISOString(),
+      emailNotifications: user.emailNotifications,
       groups: memberships.map((m) => ({ id: m.group.id, name: m.group.name, role: m.role })),
     };
   }
 
   async updateMe(user: User, body: UpdateMeRequest): Promise<MeResponse> {
-    user.name = body.name;
+    if (body.name !== undefined) user.name = body.name;
+    if (body.emailNotifications !== undefined) user.emailNotifications = body.emailNotifications;
     await this.em.flush();
     return this.me(user);
   }

@@ -1,6 +1,7 @@
 import { Box, Container, Flex, Select, Spinner, Text } from '@radix-ui/themes';
 import { Navigate, NavLink, Outlet, useLocation } from 'react-router';
 import { useMe } from '../api/auth';
+import { useMailStatus } from '../api/invitations';
 import { getToken } from '../api/client';
 import { CurrentGroupProvider, useCurrentGroup } from '../current-group';
 import { ErrorNote } from './ErrorNote';
@@ -26,6 +27,8 @@ function GroupSwitcher() {
 /** The frame around every signed-in page: wordmark, group, navigation. */
 export function AppShell() {
   const me = useMe();
+  const groupAdmin = me.data?.groups.some((g) => g.role === 'admin') ?? false;
+  const mailStatus = useMailStatus(groupAdmin);
   const location = useLocation();
   if (!getToken() || me.error) {
     if (me.error && !(me.error as { status?: number }).status) return <ErrorNote error={me.error} action="Reload the page to try again." />;
@@ -52,6 +55,7 @@ export function AppShell() {
               <NavLink to="/series">Series library</NavLink>
               <NavLink to="/group">Group</NavLink>
               <NavLink to="/account">Account</NavLink>
+              {groupAdmin && mailStatus.data?.fake && <NavLink to="/mail">Mail outbox</NavLink>}
             </Flex>
           </nav>
           <Box flexGrow="1" />

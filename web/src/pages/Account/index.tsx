@@ -1,4 +1,4 @@
-import { Button, Card, DataList, Flex, Heading, Text, TextField } from '@radix-ui/themes';
+import { Button, Card, DataList, Flex, Heading, Switch, Text, TextField } from '@radix-ui/themes';
 import { useState, type FormEvent } from 'react';
 import { useNavigate } from 'react-router';
 import { LIMITS } from '@upwell/common';
@@ -58,6 +58,22 @@ export default function AccountPage() {
           )}
           <ErrorNote error={update.error} />
         </form>
+        <div>
+          <Heading as="h2" size="4" mb="2">
+            Notification mail
+          </Heading>
+          <Text as="label" size="2">
+            <Flex gap="2" align="center">
+              <Switch
+                aria-label="Notification mail"
+                checked={me.data.emailNotifications}
+                disabled={update.isPending}
+                onCheckedChange={(on) => update.mutate({ emailNotifications: on })}
+              />
+              Mail me when a snapshot is published or someone mentions me. Invitations are always sent.
+            </Flex>
+          </Text>
+        </div>
         <div>
           <Heading as="h2" size="4" mb="2">
             Sign out

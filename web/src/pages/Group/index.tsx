@@ -9,6 +9,7 @@ import { EmptyState } from '../../components/EmptyState';
 import { ErrorNote } from '../../components/ErrorNote';
 import { PageTitle } from '../../components/PageTitle';
 import { formatWhen } from '../../components/dates';
+import { InvitationsPanel } from '../../components/InvitationsPanel';
 
 const ROLE_WORDS: Record<GroupRole, string> = { admin: 'Admin', member: 'Member' };
 
@@ -124,6 +125,10 @@ export default function GroupPage() {
             Add a member
           </Heading>
           <AddMemberForm groupId={group.id} />
+          <Heading as="h2" size="4" mt="4">
+            Invite by e-mail
+          </Heading>
+          <InvitationsPanel base={`/groups/${group.id}`} roles={GROUP_ROLES.map((r) => ({ value: r, label: ROLE_WORDS[r] }))} defaultRole="member" />
         </Flex>
       )}
       <Flex direction="column" gap="2" mt="6">

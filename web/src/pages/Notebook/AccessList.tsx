@@ -1,6 +1,7 @@
+import { InvitationsPanel } from '../../components/InvitationsPanel';
 import { Button, Flex, Heading, Select, Table, Text } from '@radix-ui/themes';
 import { useState } from 'react';
-import { NOTEBOOK_ROLE_LABELS, NOTEBOOK_ROLES, type NotebookRole, type NotebookView } from '@upwell/common';
+import { INVITABLE_NOTEBOOK_ROLES, NOTEBOOK_ROLE_LABELS, NOTEBOOK_ROLES, type NotebookRole, type NotebookView } from '@upwell/common';
 import { useGroup } from '../../api/groups';
 import { useNotebookRoles } from '../../api/notebooks';
 import { ErrorNote } from '../../components/ErrorNote';
@@ -105,6 +106,18 @@ export function AccessList({ notebook }: { notebook: NotebookView }) {
               </Button>
             </>
           )}
+        </Flex>
+      )}
+      {manage && (
+        <Flex direction="column" gap="2" mt="4">
+          <Heading as="h3" size="3">
+            Invite by e-mail
+          </Heading>
+          <InvitationsPanel
+            base={`/notebooks/${notebook.id}`}
+            roles={INVITABLE_NOTEBOOK_ROLES.map((r) => ({ value: r, label: NOTEBOOK_ROLE_LABELS[r] }))}
+            defaultRole="reviewer"
+          />
         </Flex>
       )}
     </section>

@@ -1,0 +1,79 @@
+import { EntityManager } from '@mikro-orm/sqlite';
+import { Inject, Injectable, Logger } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import { OnEvent } from '@nestjs/event-emitter';
+import { APP_CONFIG, type AppConfig } from '../config/app-config';
+import { Notebook, NotebookRoleAssignment } from '../notebooks/notebook.entity';
+import { Notification } from '../notifications/notification.entity';
+import { User } from '../users/user.entity';
+import { MAIL_EVENTS, type MentionsCreatedEvent, type SnapshotPublishedEvent } from './mail-events';
+import { MailSender } from './mail-sender';
+import { mentionMail, snapshotPublishedMail } from './mail-templates';
+
+/**
+ * Notification mail: a published snapshot to the notebook's people, a mention
+ * to the person mentioned — each only if they keep notification mail on.
+ * Runs after the change it reports has committed; a failure is logged, never
+ * thrown back at whoever caused the event.
+ */
+@Injectable()
+export class MailNotifier {
+  private readonly logger = new Logger('MailNotifier');
+  private readonly config: AppConfig;
+
+  constructor(
+    private readonly em: EntityManager,
+    private readonly sender: MailSender,
+    @Inject(ConfigService) config: ConfigService,
+  ) {
+    this.config = config.getOrThrow<AppConfig>(APP_CONFIG);
+  }
+
+  @OnEvent(MAIL_EVENTS.snapshotPublished, { async: true, promisify: true })
+  async snapshotPublished(e: SnapshotPublishedEvent): Promise<void> {
+    try {
+      const em = this.em.fork();
+      const notebook = await em.findOne(Notebook, { id: e.notebookId });
+      if (!notebook) return;
+      const publisher = await em.findOne(User, { id: e.publishedById });
+      const roles = await em.find(NotebookRoleAssignment, { notebook, user: { $ne: e.publishedById, emailNotifications: true } }, { populate: ['user'] });
+      const content = snapshotPublishedMail({
+        notebookTitle: notebook.title,
+        number: e.number,
+        title: e.title,
+        publisherName: publisher?.name ?? null,
+        link: `${this.config.appUrl}/snapshots/${e.snapshotId}`,
+        settingsUrl: this.settingsUrl(),
+      });
+      // One mail per person: nobody learns the others' addresses.
+      for (const r of roles) await this.sender.send({ ...content, to: r.user.email, groupId: notebook.group.id });
+    } catch (err) {
+      this.logger.error(`snapshot mail for ${e.snapshotId} failed: ${err instanceof Error ? err.message : String(err)}`);
+    }
+  }
+
+  @OnEvent(MAIL_EVENTS.mentionsCreated, { async: true, promisify: true })
+  async mentionsCreated(e: MentionsCreatedEvent): Promise<void> {
+    try {
+      const em = this.em.fork();
+      const created = await em.find(Notification, { id: { $in: e.notificationIds } }, { populate: ['recipient', 'by', 'notebook'] });
+      for (const n of created) {
+        if (!n.recipient.emailNotifications) continue;
+        const content = mentionMail({
+          byName: n.by.name,
+          notebookTitle: n.notebook.title,
+          excerpt: n.excerpt,
+          link: `${this.config.appUrl}/notebooks/${n.notebook.id}`,
+          settingsUrl: this.settingsUrl(),
+        });
+        await this.sender.send({ ...content, to: n.recipient.email, groupId: n.notebook.group.id });
+      }
+    } catch (err) {
+      this.logger.error(`mention mail failed: ${err instanceof Error ? err.message : String(err)}`);
+    }
+  }
+
+  private settingsUrl(): string {
+    return `${this.config.appUrl}/account`;
+  }
+}
