@@ -61,7 +61,8 @@ describe('route walk over the OpenAPI document', () => {
   }
 
   beforeAll(async () => {
-    t = await startTestApp();
+    // The walk invites far more often than a person may.
+    t = await startTestApp({ INVITATIONS_PER_HOUR: '100000' });
     const users = await Promise.all(ACTORS.map((a) => buildUser(t.url, a)));
     p = Object.fromEntries(ACTORS.map((a, i) => [a, users[i]])) as unknown as People;
     await buildGroup(t.url, p.outsider, [], 'Walk group B');

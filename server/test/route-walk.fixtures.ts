@@ -51,6 +51,11 @@ export interface World {
   shareToken: string;
   /** The notebook as an upwell-notebook file, a valid import body. */
   notebookFile: Record<string, unknown>;
+  /** A pending invitation to group A and one to the notebook, the group one's token, and the mail that carried it. */
+  groupInvitationId: string;
+  notebookInvitationId: string;
+  invitationToken: string;
+  messageId: string;
 }
 
 /** Path parameter name → the id of group A's thing it names. */
@@ -69,7 +74,10 @@ export const PARAM_FIXTURES: Record<string, (w: World, path: string, p: People) 
   notificationId: (w) => w.notificationId,
   snapshotId: (w) => w.snapshotId,
   linkId: (w) => w.linkId,
-  token: (w) => w.shareToken,
+  // Share tokens and invitation tokens are both credentials in the path.
+  token: (w, path) => (path.startsWith('/api/invitations/') ? w.invitationToken : w.shareToken),
+  invitationId: (w, path) => (path.startsWith('/api/groups/') ? w.groupInvitationId : w.notebookInvitationId),
+  messageId: (w) => w.messageId,
 };
 
 /**
@@ -192,7 +200,24 @@ export const ROUTE_RULES: Record<string, RouteRule> = {
   // The demo accounts: public, and /api/demo answers 404 while the demo seed is off (as in this walk).
   'GET /api/demo/status': { scope: 'public' },
   'GET /api/demo': { scope: 'public', openStatus: 404 },
+  // E-mail and invitations (issue 7): admins invite to the group, the lead author to the notebook; the token is the credential.
+  'GET /api/mail/status': { scope: 'self' },
+  'GET /api/mail/outbox': { scope: 'self' },
+  // The captured invitation mail belongs to group A, whose only admin is `lead`.
+  'GET /api/mail/outbox/{messageId}': { scope: 'custom', expect: (a) => (a === 'lead' ? 'ok' : 404) },
+  'POST /api/groups/{groupId}/invitations': { scope: 'group', action: 'manage-members', body: () => ({ email: freshEmail(), role: 'member' }) },
+  'GET /api/groups/{groupId}/invitations': { scope: 'group', action: 'manage-members' },
+  'DELETE /api/groups/{groupId}/invitations/{invitationId}': { scope: 'group', action: 'manage-members' },
+  'POST /api/notebooks/{notebookId}/invitations': { scope: 'notebook', action: 'manage-access', body: () => ({ email: freshEmail(), role: 'reader' }) },
+  'GET /api/notebooks/{notebookId}/invitations': { scope: 'notebook', action: 'manage-access' },
+  'DELETE /api/notebooks/{notebookId}/invitations/{invitationId}': { scope: 'notebook', action: 'manage-access' },
+  'GET /api/invitations/{token}': { scope: 'public', capability: true },
+  'POST /api/invitations/{token}/accept': { scope: 'public', capability: true, body: () => ({ name: 'Invited walker', password: 'correct horse battery' }) },
 };
+
+function freshEmail(): string {
+  return `invitee.${Math.random().toString(36).slice(2)}@example.org`;
+}
 
 function commentOwnerOnly(a: Actor): 'ok' | 403 | 404 {
   if (a === 'lead') return 'ok';
@@ -235,6 +260,10 @@ export async function buildWorld(url: string, p: People): Promise<World> {
   const snapshotId = (await api.post(`${nbPath}/snapshots`).set(p.lead.auth).send({ title: 'Walk v1' }).expect(201)).body.id as string;
   const link = (await api.post(`/api/snapshots/${snapshotId}/share-links`).set(p.lead.auth).send({}).expect(201)).body;
   const notebookFile = (await api.get(`${nbPath}/export`).set(p.lead.auth).expect(200)).body;
+  const invitee = freshEmail();
+  const groupInvitationId = (await api.post(`/api/groups/${group.id}/invitations`).set(p.lead.auth).send({ email: invitee, role: 'member' }).expect(201)).body.id as string;
+  const notebookInvitationId = (await api.post(`${nbPath}/invitations`).set(p.lead.auth).send({ email: freshEmail(), role: 'reader' }).expect(201)).body.id as string;
+  const mail = await invitationMail(url, p.lead, invitee);
   return {
     groupId: group.id,
     notebookId: nb.id,
@@ -252,7 +281,22 @@ export async function buildWorld(url: string, p: People): Promise<World> {
     linkId: link.id,
     shareToken: link.token,
     notebookFile,
+    groupInvitationId,
+    notebookInvitationId,
+    invitationToken: /\/invitations\/([A-Za-z0-9_-]{43})\b/.exec(mail.text)![1],
+    messageId: mail.id,
   };
+}
+
+/** The invitation mail to `to` as the admin reads it in the local mail catcher's outbox (it arrives asynchronously). */
+async function invitationMail(url: string, admin: TestUser, to: string): Promise<{ id: string; text: string }> {
+  for (let i = 0; i < 200; i++) {
+    const box = (await request(url).get('/api/mail/outbox').set(admin.auth).expect(200)).body as { messages: { id: string; to: string[] | string; text: string }[] };
+    const found = box.messages.find((m) => String(m.to).includes(to));
+    if (found) return found;
+    await new Promise((r) => setTimeout(r, 25));
+  }
+  throw new Error(`route-walk: no invitation mail to ${to} reached the outbox`);
 }
 
 /** A Yjs update appending one paragraph to the document whose state is given (base64). */
