@@ -5,3 +5,4 @@ export * from './engine';
 export * from './time';
 export * from './editor';
 export * from './figures';
+export * from './figure-kinds';

@@ -1,4 +1,5 @@
-import type { FigureResult, UsedSeries } from '../src/api/figures';
+import type { FigureKind, FigureResult } from '../src/figure-kinds/registry';
+import type { UsedSeries } from '../src/figure-kinds/shared/result-parts';
 
 /** Builders of sample figure results for the figure-presentation tests (invented series). */
 export const SERIES_ID = '6f1c2a9e-3b1d-4c55-9a0e-1f2d3c4b5a60';
@@ -7,7 +8,8 @@ export function used(over: Partial<UsedSeries> = {}): UsedSeries {
   return { seriesId: SERIES_ID, name: 'DIC 0–100 m', version: 3, units: 'Pg C', origin: 'model-output', valuesSha256: 'ab'.repeat(32), ...over };
 }
 
-export function result(kind: string, data: Record<string, unknown>, over: Partial<FigureResult> = {}): FigureResult {
+/** A result of the kind with the given data (its shape is the test's to choose). */
+export function result(kind: FigureKind, data: unknown, over: Partial<Omit<FigureResult, 'kind' | 'data'>> = {}): FigureResult {
   return {
     kind,
     data,
@@ -20,5 +22,5 @@ export function result(kind: string, data: Record<string, unknown>, over: Partia
     cacheKey: 'k',
     cached: false,
     ...over,
-  };
+  } as FigureResult;
 }

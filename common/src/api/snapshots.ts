@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { userSchema } from './auth';
-import { figureResultSchema, usedSeriesSchema } from './figures';
+import { figureResultSchema, usedSeriesSchema } from '../figure-kinds';
 
 /** Limits shared by the publish form and the server. */
 export const SNAPSHOT_LIMITS = {

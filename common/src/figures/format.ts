@@ -1,4 +1,4 @@
-import type { UsedSeries } from '../api/figures';
+import type { UsedSeries } from '../figure-kinds/shared/result-parts';
 
 /** The minus sign typeset in journals (U+2212), not the hyphen. */
 export const MINUS = '\u2212';

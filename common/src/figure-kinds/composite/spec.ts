@@ -1,15 +1,15 @@
-import type { FigureRecipe } from '../../api/figures';
-import type { FigureSpec } from './spec-type';
-import type { CompositePlotData } from '../figure-data';
-import { axisTitle, BASE_CONFIG, COLD, SCHEMA, WARM } from './common';
+import type { SpecContext } from '../kind';
+import type { FigureSpec } from '../shared/spec-type';
+import { axisTitle, BASE_CONFIG, COLD, SCHEMA, WARM } from '../shared/spec-parts';
+import type { CompositeData } from './index';
 
 /** An event composite: each event as a thin grey line, the confidence band, and the mean on top. */
-export function compositeSpec(data: CompositePlotData, recipe?: FigureRecipe): FigureSpec {
-  const phase = data.phase ?? (recipe && 'phase' in recipe ? recipe.phase : undefined) ?? 'warm';
-  const confidence = recipe && 'confidence' in recipe && recipe.confidence !== undefined ? recipe.confidence : 0.95;
+export function compositeSpec(data: CompositeData, _ctx?: SpecContext): FigureSpec {
+  const { phase, confidence } = data;
   const colour = phase === 'cold' ? COLD : WARM;
-  const stats = data.offsets.map((offset, i) => ({ offset, mean: data.mean[i], lower: data.lower[i], upper: data.upper[i], n: data.n[i] }));
-  const members = data.members.flatMap((m) => data.offsets.map((offset, i) => ({ member: m.at, offset, value: m.values[i] ?? null })));
+  const stats = data.offsets;
+  const members = data.members.map((m) => ({ member: m.event, offset: m.offset, value: m.value }));
+  const memberCount = new Set(data.members.map((m) => m.event)).size;
   const x = { field: 'offset', type: 'quantitative', title: 'Months from the event peak (0 = peak)' };
   const y = axisTitle(`Composite anomaly, ${phase} events`, data.units);
   return {
@@ -36,7 +36,7 @@ export function compositeSpec(data: CompositePlotData, recipe?: FigureRecipe): F
       },
     ],
     title: {
-      text: `Mean of ${data.members.length} ${phase} events (line), ${Math.round(confidence * 100)}% confidence band (shaded), each event in grey`,
+      text: `Mean of ${memberCount} ${phase} events (line), ${Math.round(confidence * 100)}% confidence band (shaded), each event in grey`,
       fontSize: 11,
     },
     config: BASE_CONFIG,

@@ -1,16 +1,21 @@
 import { describe, expect, it } from 'vitest';
-import { BUDGET_COLOURS } from '../budget-colours';
-import { NO_UNITS, readFigureData } from '../figure-data';
-import { result, used } from '../../../test-fixtures/figure-results';
-import { budgetSpec } from './budget';
-import { COLD, WARM } from './common';
-import { compositeSpec } from './composite';
-import { hovmollerSpec } from './hovmoller';
-import { specForResult } from './index';
-import { lagCorrelationSpec } from './lag-correlation';
-import { scatterSpec } from './scatter';
-import { seasonalCycleSpec } from './seasonal-cycle';
-import { timeseriesSpec } from './timeseries';
+import { BUDGET_COLOURS } from '../figures/budget-colours';
+import { result, used } from '../../test-fixtures/figure-results';
+import { budgetSpec } from './budget/spec';
+import { COLD, NO_UNITS, WARM } from './shared/spec-parts';
+import { compositeSpec } from './composite/spec';
+import { hovmollerSpec } from './hovmoller/spec';
+import { figureTable, specForResult } from './registry';
+import { lagCorrelationSpec } from './lag-correlation/spec';
+import { scatterSpec } from './scatter/spec';
+import { seasonalCycleSpec } from './seasonal-cycle/spec';
+import { timeseriesSpec } from './timeseries/spec';
+import type { FigureEvent } from './shared/result-parts';
+
+// The inputs are the kinds' result shapes, as the server sends them (before the one-shape change
+// these tests fed column-shaped "plot data"; what each test checks of the spec is unchanged).
+const event = (phase: 'warm' | 'cold', start: string, peak: string, end: string): FigureEvent => ({ phase, start, peak, end, months: 0, peakValue: null, strength: null, label: '' });
+const noTrend = { perDecade: null, perDecadeStdErr: null, r2: null, n: 0 };
 
 type Layer = { mark: { type: string; [k: string]: unknown }; encoding?: Record<string, Record<string, unknown>>; data?: { values: Record<string, unknown>[] }; transform?: unknown[] };
 const layers = (spec: unknown) => (spec as { layer: Layer[] }).layer;
@@ -23,13 +28,10 @@ describe('timeseries spec', () => {
       { month: '1997-02', value: null },
       { month: '1997-03', value: 0.4 },
     ],
-    events: [
-      { phase: 'warm', start: '1997-05', peak: '1997-12', end: '1998-04' },
-      { phase: 'cold', start: '1998-08', peak: '1999-01', end: '1999-06' },
-    ],
+    events: [event('warm', '1997-05', '1997-12', '1998-04'), event('cold', '1998-08', '1999-01', '1999-06')],
     units: 'Pg C',
     show: 'anomaly',
-    name: 'DIC',
+    trend: noTrend,
   });
 
   it('shades each event behind the line, warm in red and cold in blue, with a legend', () => {
@@ -49,13 +51,13 @@ describe('timeseries spec', () => {
 
   it('puts units on the y axis and keeps gaps as nulls', () => {
     const [line] = ofType(spec, 'line');
-    expect(line.encoding!.y.title).toBe('DIC anomaly (Pg C)');
+    expect(line.encoding!.y.title).toBe('Series anomaly (Pg C)');
     expect(line.encoding!.x.title).toBe('Month');
     expect(line.data!.values[1].value).toBeNull();
   });
 
   it('draws no event layers when there are no events, and says when units are missing', () => {
-    const bare = timeseriesSpec({ points: [{ month: '2000-01', value: 1 }], events: [], units: '', show: 'raw' });
+    const bare = timeseriesSpec({ points: [{ month: '2000-01', value: 1 }], events: [], units: '', show: 'raw', trend: noTrend });
     expect(ofType(bare, 'rect')).toHaveLength(0);
     expect(ofType(bare, 'line')[0].encoding!.y.title).toBe(`Series (${NO_UNITS})`);
   });
@@ -63,10 +65,12 @@ describe('timeseries spec', () => {
 
 describe('lag-correlation spec', () => {
   const data = {
+    method: 'spearman' as const,
+    alpha: 0.05,
     lags: [-1, 0, 1, 2].map((lag) => ({ lag, r: [0.1, 0.3, 0.62, 0.2][lag + 1], n: 300, nEff: 40, p: 0.01, threshold: 0.31 })),
-    strongest: { lag: 1, r: 0.62, p: 0.001 },
+    strongest: { lag: 1, r: 0.62, n: 300, nEff: 40, p: 0.001, threshold: 0.31 },
   };
-  const spec = lagCorrelationSpec(data, { kind: 'lag-correlation', index: { seriesId: 'a' }, series: { seriesId: 'b' }, method: 'spearman', alpha: 0.05 });
+  const spec = lagCorrelationSpec(data);
 
   it('draws r as bars against lag with a dimensionless y axis naming the method', () => {
     const [bar] = ofType(spec, 'bar');
@@ -90,26 +94,24 @@ describe('lag-correlation spec', () => {
   });
 
   it('has no strongest-lag label when no correlation is defined', () => {
-    expect(ofType(lagCorrelationSpec({ lags: [], strongest: null }), 'text')).toHaveLength(0);
+    expect(ofType(lagCorrelationSpec({ method: 'pearson', alpha: 0.05, lags: [], strongest: null }), 'text')).toHaveLength(0);
   });
 });
 
 describe('composite spec', () => {
-  const spec = compositeSpec(
-    {
-      offsets: [-1, 0, 1],
-      mean: [0.1, 0.5, 0.2],
-      lower: [0, 0.3, 0],
-      upper: [0.2, 0.7, 0.4],
-      n: [3, 3, 3],
-      members: [
-        { at: '1997-12', values: [0.1, 0.6, 0.3] },
-        { at: '2015-12', values: [0.2, 0.4, null] },
-      ],
-      units: 'mol m⁻²',
-    },
-    { kind: 'composite', index: { seriesId: 'a' }, series: { seriesId: 'b' }, phase: 'cold', confidence: 0.9 },
-  );
+  const member = (event: string, values: (number | null)[]) => values.map((value, i) => ({ event, offset: i - 1, value }));
+  const spec = compositeSpec({
+    phase: 'cold',
+    confidence: 0.9,
+    events: [],
+    offsets: [
+      { offset: -1, mean: 0.1, lower: 0, upper: 0.2, n: 3 },
+      { offset: 0, mean: 0.5, lower: 0.3, upper: 0.7, n: 3 },
+      { offset: 1, mean: 0.2, lower: 0, upper: 0.4, n: 3 },
+    ],
+    members: [...member('1997-12', [0.1, 0.6, 0.3]), ...member('2015-12', [0.2, 0.4, null])],
+    units: 'mol m⁻²',
+  });
 
   it('draws members as thin grey lines, one per event', () => {
     const members = ofType(spec, 'line').find((l) => l.encoding!.detail)!;
@@ -131,13 +133,17 @@ describe('composite spec', () => {
 
 describe('budget spec', () => {
   const spec = budgetSpec({
-    months: ['2000-01', '2000-02'],
-    terms: [
-      { name: 'advection', values: [1, 2] },
-      { name: 'Air-sea flux', values: [-0.5, 0.5] },
+    termNames: ['advection', 'Air-sea flux'],
+    months: [
+      { month: '2000-01', tendency: 0.4, sumOfTerms: 0.5, residual: -0.1 },
+      { month: '2000-02', tendency: 2.6, sumOfTerms: 2.5, residual: 0.1 },
     ],
-    tendency: [0.4, 2.6],
-    residual: [-0.1, 0.1],
+    terms: [
+      { month: '2000-01', term: 'advection', value: 1 },
+      { month: '2000-02', term: 'advection', value: 2 },
+      { month: '2000-01', term: 'Air-sea flux', value: -0.5 },
+      { month: '2000-02', term: 'Air-sea flux', value: 0.5 },
+    ],
     rmsResidual: 0.1,
     relativeResidual: 0.05,
     units: 'Tg C month⁻¹',
@@ -164,6 +170,8 @@ describe('budget spec', () => {
 
 describe('hovmöller spec', () => {
   const spec = hovmollerSpec({
+    show: 'anomaly',
+    latitudes: [-5, 0, 5],
     cells: [
       { month: '2000-01', lat: -5, value: -1 },
       { month: '2000-01', lat: 0, value: 0.5 },
@@ -185,19 +193,21 @@ describe('hovmöller spec', () => {
 });
 
 describe('scatter spec', () => {
+  // The server sends only months with both values; the spec still drops any pair with a gap.
   const data = {
+    lag: 3,
     points: [
       { x: -1, y: -2, month: '2000-01' },
       { x: 2, y: 3, month: '2000-02' },
-      { x: null, y: 1, month: '2000-03' },
+      { x: null as unknown as number, y: 1, month: '2000-03' },
     ],
-    fit: { slope: 1.5, intercept: -0.5, r2: 0.8123, n: 2 },
+    fit: { slope: 1.5, intercept: -0.5, slopeStdErr: null, r2: 0.8123, n: 2 },
+    line: [],
     xUnits: '°C',
     yUnits: 'Pg C',
-    xName: 'Index',
-    yName: 'DIC',
   };
-  const spec = scatterSpec(data, { kind: 'scatter', index: { seriesId: 'a' }, series: { seriesId: 'b' }, lag: 3 });
+  const ctx = { used: [used({ name: 'Index' }), used({ name: 'DIC' })] };
+  const spec = scatterSpec(data, ctx);
 
   it('puts r² in the title and the regression line across the x range', () => {
     expect((spec as { title: { text: string; subtitle: string } }).title.text).toBe('r² = 0.81, slope 1.500 (n = 2)');
@@ -217,14 +227,15 @@ describe('scatter spec', () => {
   });
 
   it('draws no line without a fit', () => {
-    expect(ofType(scatterSpec({ ...data, fit: null }), 'line')).toHaveLength(0);
+    expect(ofType(scatterSpec({ ...data, fit: { slope: null, intercept: null, slopeStdErr: null, r2: null, n: 0 } }, ctx), 'line')).toHaveLength(0);
   });
 });
 
 describe('seasonal-cycle spec', () => {
   const spec = seasonalCycleSpec({
-    months: Array.from({ length: 12 }, (_, i) => ({ month: i + 1, mean: i, sd: 1, min: i - 2, max: i + 2, n: 30 })),
+    months: Array.from({ length: 12 }, (_, i) => ({ month: i + 1, name: '', mean: i, sd: 1, min: i - 2, max: i + 2, n: 30, years: 30 })),
     units: 'Pg C',
+    base: { from: '1991-01', to: '2020-12' },
   });
   it('plots the mean over calendar months in order, with a ±1 sd band and the range', () => {
     const [line] = ofType(spec, 'line');
@@ -237,15 +248,50 @@ describe('seasonal-cycle spec', () => {
 });
 
 describe('specForResult', () => {
-  it('fills missing units from the versions used and gives no chart for the event table', () => {
-    const r = result('timeseries', { points: [{ month: '2000-01', value: 1 }], events: [], show: 'raw' }, { used: [used({ units: 'mmol m⁻³' })] });
-    const spec = specForResult({ kind: 'timeseries', series: { seriesId: 'a' } }, r);
-    expect(JSON.stringify(spec)).toContain('(mmol m⁻³)');
-    expect(specForResult({ kind: 'event-table', index: { seriesId: 'a' } }, result('event-table', { events: [] }))).toBeNull();
+  it('draws a result through its kind’s spec, with units from the data, and gives no chart for the event table', () => {
+    const r = result('timeseries', { points: [{ month: '2000-01', value: 1 }], events: [], units: 'mmol m⁻³', show: 'raw', trend: noTrend });
+    expect(JSON.stringify(specForResult(r))).toContain('(mmol m⁻³)');
+    expect(specForResult(result('event-table', { carbonSeries: [], rows: [] }))).toBeNull();
   });
 
-  it('reads scatter units from the index (x) and the series (y)', () => {
-    const d = readFigureData('scatter', result('scatter', { points: [], fit: null }, { used: [used({ units: '°C', name: 'Index' }), used({ units: 'Pg C' })] }));
-    expect(d).toMatchObject({ xUnits: '°C', yUnits: 'Pg C', xName: 'Index' });
+  it('names the scatter axes after the index (x) and the series (y) used', () => {
+    const data = { lag: 0, points: [], fit: { slope: null, intercept: null, slopeStdErr: null, r2: null, n: 0 }, line: [], xUnits: '°C', yUnits: 'Pg C' };
+    const spec = JSON.stringify(specForResult(result('scatter', data, { used: [used({ units: '°C', name: 'Index' }), used({ name: 'DIC' })] })));
+    expect(spec).toContain('Index anomaly (°C)');
+    expect(spec).toContain('DIC anomaly (Pg C)');
+  });
+});
+
+describe('figureTable (CSV rows of each kind)', () => {
+  it('composite: one column per event, one row per offset', () => {
+    const data = {
+      phase: 'warm', units: 'Pg C/yr', confidence: 0.95, events: [],
+      offsets: [{ offset: -1, mean: 0.1, lower: null, upper: null, n: 1 }, { offset: 0, mean: -0.3, lower: -0.5, upper: -0.1, n: 2 }],
+      members: [{ event: '1997-12', offset: -1, value: 0.1 }, { event: '1997-12', offset: 0, value: -0.4 }, { event: '2015-11', offset: 0, value: -0.2 }],
+    };
+    const t = figureTable(result('composite', data));
+    expect(t.header).toEqual(['offset', 'mean (Pg C/yr)', 'lower', 'upper', 'n', 'event peaking 1997-12', 'event peaking 2015-11']);
+    expect(t.rows).toEqual([[-1, 0.1, null, null, 1, 0.1, null], [0, -0.3, -0.5, -0.1, 2, -0.4, -0.2]]);
+  });
+
+  it('event table: each carbon series’ change in Pg C beside the event', () => {
+    const data = {
+      carbonSeries: [{ seriesId: 'c', name: 'Flux', units: 'Pg C/yr', treatment: 'rate-integrated' }],
+      rows: [{ ...event('cold', '1988-05', '1988-12', '1989-05'), months: 13, peakValue: -1.9, strength: 'strong', carbon: { c: 0.42 } }],
+    };
+    const t = figureTable(result('event-table', data));
+    expect(t.header.at(-1)).toBe('Flux (Pg C)');
+    expect(t.rows[0]).toEqual(['cold', '1988-05', '1988-12', '1989-05', 13, -1.9, 'strong', 0.42]);
+  });
+
+  it('budget: one column per term, then tendency and residual', () => {
+    const data = {
+      units: 'Pg C/yr', termNames: ['advection', 'air–sea flux'], rmsResidual: 0.07, relativeResidual: 0.04,
+      months: [{ month: '2000-01', tendency: 1, sumOfTerms: 0.9, residual: 0.1 }],
+      terms: [{ month: '2000-01', term: 'advection', value: 0.5 }, { month: '2000-01', term: 'air–sea flux', value: 0.4 }],
+    };
+    const t = figureTable(result('budget', data));
+    expect(t.header).toEqual(['month', 'advection (Pg C/yr)', 'air–sea flux (Pg C/yr)', 'tendency', 'residual']);
+    expect(t.rows).toEqual([['2000-01', 0.5, 0.4, 1, 0.1]]);
   });
 });

@@ -1,12 +1,15 @@
-import type { FigureRecipe } from '../../api/figures';
-import type { FigureSpec } from './spec-type';
-import type { ScatterPlotData } from '../figure-data';
-import { formatValue } from '../format';
-import { ACCENT, axisTitle, BASE_CONFIG, INK, SCHEMA } from './common';
+import { formatValue } from '../../figures/format';
+import type { SpecContext } from '../kind';
+import type { FigureSpec } from '../shared/spec-type';
+import { ACCENT, axisTitle, BASE_CONFIG, INK, SCHEMA } from '../shared/spec-parts';
+import type { ScatterData } from './index';
 
 /** Index against carbon anomaly, one point per month, with the least-squares line and r² in the title. */
-export function scatterSpec(data: ScatterPlotData, recipe?: FigureRecipe): FigureSpec {
-  const lag = recipe && 'lag' in recipe && recipe.lag !== undefined ? recipe.lag : 0;
+export function scatterSpec(data: ScatterData, ctx?: SpecContext): FigureSpec {
+  const { lag } = data;
+  // The index is bound first, the series second.
+  const xName = ctx?.used[0]?.name ?? 'Index';
+  const yName = ctx?.used[1]?.name ?? 'Carbon';
   const points = data.points.filter((p) => p.x !== null && p.y !== null);
   const xs = points.map((p) => p.x as number);
   const layers: unknown[] = [
@@ -14,14 +17,14 @@ export function scatterSpec(data: ScatterPlotData, recipe?: FigureRecipe): Figur
       data: { values: points },
       mark: { type: 'point', filled: true, size: 18, opacity: 0.55, color: ACCENT },
       encoding: {
-        x: { field: 'x', type: 'quantitative', title: axisTitle(`${data.xName ?? 'Index'} anomaly`, data.xUnits), scale: { zero: false } },
-        y: { field: 'y', type: 'quantitative', title: axisTitle(`${data.yName ?? 'Carbon'} anomaly`, data.yUnits), scale: { zero: false } },
+        x: { field: 'x', type: 'quantitative', title: axisTitle(`${xName} anomaly`, data.xUnits), scale: { zero: false } },
+        y: { field: 'y', type: 'quantitative', title: axisTitle(`${yName} anomaly`, data.yUnits), scale: { zero: false } },
       },
     },
   ];
   let title = 'No fit: too few months with both values';
-  if (data.fit && xs.length > 0) {
-    const { slope, intercept } = data.fit;
+  const { slope, intercept } = data.fit;
+  if (slope !== null && intercept !== null && xs.length > 0) {
     const lo = Math.min(...xs);
     const hi = Math.max(...xs);
     layers.push({
@@ -29,7 +32,7 @@ export function scatterSpec(data: ScatterPlotData, recipe?: FigureRecipe): Figur
       mark: { type: 'line', color: INK, strokeWidth: 1.5 },
       encoding: { x: { field: 'x', type: 'quantitative' }, y: { field: 'y', type: 'quantitative' } },
     });
-    title = `r² = ${formatValue(data.fit.r2, 2)}, slope ${formatValue(slope, 3)} (n = ${data.fit.n})`;
+    title = `r² = ${data.fit.r2 === null ? 'n/a' : formatValue(data.fit.r2, 2)}, slope ${formatValue(slope, 3)} (n = ${data.fit.n})`;
   }
   const lagText = lag === 0 ? 'same month' : lag > 0 ? `index leads by ${lag} months` : `index lags by ${-lag} months`;
   return {

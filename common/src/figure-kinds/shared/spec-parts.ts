@@ -1,6 +1,11 @@
 import { formatMonth, parseMonth } from '../../series/month';
-import type { EventSpan } from '../figure-data';
-import { NO_UNITS } from '../figure-data';
+import type { FigureEvent } from './result-parts';
+
+/** What to call an axis when the server gave no units: say so rather than print a bare number. */
+export const NO_UNITS = 'units not given';
+
+/** The months of an event a chart shades. */
+export type EventSpan = Pick<FigureEvent, 'phase' | 'start' | 'peak' | 'end'>;
 
 /** vega-lite schema of every spec. */
 export const SCHEMA = 'https://vega.github.io/schema/vega-lite/v6.json';

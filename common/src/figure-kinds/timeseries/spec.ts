@@ -1,12 +1,12 @@
-import type { FigureRecipe } from '../../api/figures';
-import type { FigureSpec } from './spec-type';
-import type { TimeseriesPlotData } from '../figure-data';
-import { axisTitle, BASE_CONFIG, eventLayers, INK, monthStart, SCHEMA } from './common';
+import type { SpecContext } from '../kind';
+import type { FigureSpec } from '../shared/spec-type';
+import { axisTitle, BASE_CONFIG, eventLayers, INK, monthStart, SCHEMA } from '../shared/spec-parts';
+import type { TimeseriesData } from './index';
 
 /** A series over time (raw or anomaly) with warm and cold events shaded behind it. */
-export function timeseriesSpec(data: TimeseriesPlotData, _recipe?: FigureRecipe): FigureSpec {
+export function timeseriesSpec(data: TimeseriesData, _ctx?: SpecContext): FigureSpec {
   const anomaly = data.show === 'anomaly';
-  const label = `${data.name ?? 'Series'}${anomaly ? ' anomaly' : ''}`;
+  const label = `Series${anomaly ? ' anomaly' : ''}`;
   const points = data.points.map((p) => ({ month: monthStart(p.month), value: p.value }));
   const layers: unknown[] = [...eventLayers(data.events)];
   if (anomaly) layers.push({ mark: { type: 'rule', color: '#9aa0a3', strokeWidth: 0.75 }, encoding: { y: { datum: 0 } } });

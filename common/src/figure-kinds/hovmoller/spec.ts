@@ -1,10 +1,10 @@
-import type { FigureRecipe } from '../../api/figures';
-import type { FigureSpec } from './spec-type';
-import type { HovmollerPlotData } from '../figure-data';
-import { axisTitle, BASE_CONFIG, monthAfter, monthStart, SCHEMA } from './common';
+import type { SpecContext } from '../kind';
+import type { FigureSpec } from '../shared/spec-type';
+import { axisTitle, BASE_CONFIG, monthAfter, monthStart, SCHEMA } from '../shared/spec-parts';
+import type { HovmollerData } from './index';
 
 /** The spacing of latitude bands (the smallest gap between distinct latitudes). */
-function latStep(cells: HovmollerPlotData['cells']): number {
+function latStep(cells: HovmollerData['cells']): number {
   const lats = [...new Set(cells.map((c) => c.lat))].sort((a, b) => a - b);
   let step = Infinity;
   for (let i = 1; i < lats.length; i++) step = Math.min(step, lats[i] - lats[i - 1]);
@@ -12,10 +12,10 @@ function latStep(cells: HovmollerPlotData['cells']): number {
 }
 
 /** A time–latitude diagram: one cell per month and latitude band, diverging colours centred on zero (red above, blue below). */
-export function hovmollerSpec(data: HovmollerPlotData, recipe?: FigureRecipe): FigureSpec {
+export function hovmollerSpec(data: HovmollerData, _ctx?: SpecContext): FigureSpec {
   const half = latStep(data.cells) / 2;
   const values = data.cells.map((c) => ({ ...c, from: monthStart(c.month), to: monthAfter(c.month), south: c.lat - half, north: c.lat + half }));
-  const show = recipe && 'show' in recipe ? recipe.show : 'anomaly';
+  const { show } = data;
   return {
     $schema: SCHEMA,
     width: 'container',

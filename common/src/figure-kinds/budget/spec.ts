@@ -1,22 +1,22 @@
-import type { FigureRecipe } from '../../api/figures';
-import type { FigureSpec } from './spec-type';
-import { budgetColour } from '../budget-colours';
-import type { BudgetPlotData } from '../figure-data';
-import { formatValue } from '../format';
-import { axisTitle, BASE_CONFIG, monthStart, SCHEMA } from './common';
+import { budgetColour } from '../../figures/budget-colours';
+import { formatValue } from '../../figures/format';
+import type { SpecContext } from '../kind';
+import type { FigureSpec } from '../shared/spec-type';
+import { axisTitle, BASE_CONFIG, monthStart, SCHEMA } from '../shared/spec-parts';
+import type { BudgetData } from './index';
 
 /**
  * Budget closure: the terms stacked as bars each month, the tendency as a
  * line over them, the residual (tendency − sum of terms) as a dashed line.
  * Every term keeps its colour from budget-colours, named in the legend.
  */
-export function budgetSpec(data: BudgetPlotData, _recipe?: FigureRecipe): FigureSpec {
-  const termValues = data.terms.flatMap((t) => data.months.map((m, i) => ({ month: monthStart(m), term: t.name, value: t.values[i] ?? null })));
-  const lines = data.months.flatMap((m, i) => [
-    { month: monthStart(m), term: 'tendency', value: data.tendency[i] ?? null },
-    { month: monthStart(m), term: 'residual', value: data.residual[i] ?? null },
+export function budgetSpec(data: BudgetData, _ctx?: SpecContext): FigureSpec {
+  const termValues = data.terms.map((t) => ({ month: monthStart(t.month), term: t.term, value: t.value }));
+  const lines = data.months.flatMap((m) => [
+    { month: monthStart(m.month), term: 'tendency', value: m.tendency },
+    { month: monthStart(m.month), term: 'residual', value: m.residual },
   ]);
-  const domain = [...data.terms.map((t) => t.name), 'tendency', 'residual'];
+  const domain = [...data.termNames, 'tendency', 'residual'];
   const color = { field: 'term', type: 'nominal', scale: { domain, range: domain.map(budgetColour) }, legend: { title: 'Budget term' } };
   const x = { field: 'month', type: 'temporal', title: 'Month' };
   const y = axisTitle('Rate of change', data.units);

@@ -1,17 +1,16 @@
-import type { FigureRecipe } from '../../api/figures';
-import type { FigureSpec } from './spec-type';
-import type { LagCorrelationPlotData } from '../figure-data';
-import { formatValue } from '../format';
-import { ACCENT, BASE_CONFIG, MUTED, SCHEMA, WARM } from './common';
+import { formatValue } from '../../figures/format';
+import type { SpecContext } from '../kind';
+import type { FigureSpec } from '../shared/spec-type';
+import { ACCENT, BASE_CONFIG, MUTED, SCHEMA, WARM } from '../shared/spec-parts';
+import type { LagCorrelationData } from './index';
 
 /**
  * Correlation r against lag as bars, the significance threshold drawn as
  * rules at ±threshold for every lag (it varies with the effective sample
  * size), and the strongest lag marked and labelled.
  */
-export function lagCorrelationSpec(data: LagCorrelationPlotData, recipe?: FigureRecipe): FigureSpec {
-  const method = data.method ?? (recipe && 'method' in recipe ? recipe.method : undefined) ?? 'pearson';
-  const alpha = recipe && 'alpha' in recipe && recipe.alpha !== undefined ? recipe.alpha : 0.05;
+export function lagCorrelationSpec(data: LagCorrelationData, _ctx?: SpecContext): FigureSpec {
+  const { method, alpha } = data;
   const values = data.lags.map((l) => ({
     ...l,
     from: l.lag - 0.45,
@@ -49,8 +48,8 @@ export function lagCorrelationSpec(data: LagCorrelationPlotData, recipe?: Figure
       encoding: { x: { field: 'from', type: 'quantitative' }, x2: { field: 'to' }, y: { field: 'negThreshold', type: 'quantitative' } },
     },
   ];
-  if (data.strongest) {
-    const s = data.strongest;
+  if (data.strongest && data.strongest.r !== null) {
+    const s = { lag: data.strongest.lag, r: data.strongest.r };
     const label = `strongest: r = ${formatValue(s.r, 2)} at lag ${formatValue(s.lag, 0)}`;
     const mark = [{ lag: s.lag, r: s.r, label }];
     layers.push(

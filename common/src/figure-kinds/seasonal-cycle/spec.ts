@@ -1,12 +1,12 @@
-import type { FigureRecipe } from '../../api/figures';
-import type { FigureSpec } from './spec-type';
-import type { SeasonalCyclePlotData } from '../figure-data';
-import { ACCENT, axisTitle, BASE_CONFIG, SCHEMA } from './common';
+import type { SpecContext } from '../kind';
+import type { FigureSpec } from '../shared/spec-type';
+import { ACCENT, axisTitle, BASE_CONFIG, SCHEMA } from '../shared/spec-parts';
+import type { SeasonalCycleData } from './index';
 
 const MONTH_NAMES = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
 
 /** The mean annual cycle over the base period: mean line, ±1 sd band, and the range as whiskers. */
-export function seasonalCycleSpec(data: SeasonalCyclePlotData, _recipe?: FigureRecipe): FigureSpec {
+export function seasonalCycleSpec(data: SeasonalCycleData, _ctx?: SpecContext): FigureSpec {
   const values = data.months.map((m) => ({
     ...m,
     name: MONTH_NAMES[m.month - 1],
@@ -14,7 +14,7 @@ export function seasonalCycleSpec(data: SeasonalCyclePlotData, _recipe?: FigureR
     high: m.mean !== null && m.sd !== null ? m.mean + m.sd : null,
   }));
   const x = { field: 'name', type: 'ordinal', sort: MONTH_NAMES, title: 'Calendar month', axis: { labelAngle: 0 } };
-  const y = axisTitle(data.name ?? 'Monthly mean', data.units);
+  const y = axisTitle('Monthly mean', data.units);
   return {
     $schema: SCHEMA,
     width: 'container',

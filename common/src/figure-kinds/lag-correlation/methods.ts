@@ -1,0 +1,15 @@
+import type { z } from 'zod';
+import { describeAnomaly, methodsSentence, NEFF_FORM, type NamedVersion } from '../shared/methods';
+import type { lagCorrelationRecipeSchema } from './index';
+
+/** The methods sentence of a lag-correlation figure. */
+export function lagCorrelationMethods(r: z.output<typeof lagCorrelationRecipeSchema>, index: NamedVersion, series: NamedVersion): string {
+  return methodsSentence(
+    [
+      `${r.method === 'spearman' ? 'Spearman rank' : 'Pearson'} correlation of ${index.name} and ${series.name} ${describeAnomaly(r.anomaly)}, at lags −${r.maxLag} to +${r.maxLag} months (positive: ${index.name} leads)`,
+      `two-sided t-test p-values with ${NEFF_FORM}`,
+      `significance threshold |r| at alpha = ${r.alpha} from each lag's nEff`,
+    ],
+    [index, series],
+  );
+}
