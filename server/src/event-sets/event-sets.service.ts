@@ -1,10 +1,9 @@
 import { EntityManager } from '@mikro-orm/sqlite';
 import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
-import type { DetectedEvents, EventSetView, detectEventSetRequestSchema, saveEventSetRequestSchema } from '@upwell/common';
+import { methodsSentence, type DetectedEvents, type EventSetView, type detectEventSetRequestSchema, type saveEventSetRequestSchema } from '@upwell/common';
 import type { z } from 'zod';
 import { FigureInputsService } from '../figures/figure-inputs.service';
 import { eventsByRule } from '../figures/figure-events';
-import { methodsSentence } from '../figures/methods';
 import { runEngine } from '../figures/figures.service';
 import { NotebookPolicy } from '../notebooks/notebook.policy';
 import type { User } from '../users/user.entity';

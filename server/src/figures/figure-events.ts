@@ -1,10 +1,18 @@
-import { detectEvents, eventStrength, parseMonth, type FigureEvent } from '@upwell/common';
+import {
+  describeAnomaly,
+  describeEventSet,
+  describeRule,
+  detectEvents,
+  eventStrength,
+  parseMonth,
+  type EventsInput,
+  type FigureEvent,
+  type ParsedAnomalyOptions,
+  type ParsedEventSource,
+  type RuleOpts,
+} from '@upwell/common';
 import { seriesAnomaly } from './figure-anomaly';
 import type { LoadedEventSet, LoadedSeries } from './loaded-inputs';
-import { describeAnomaly, describeEventSet, describeRule, type AnomalyOpts, type RuleOpts } from './methods';
-
-/** An event source after parsing: the rule with its defaults, or a saved set by id. */
-export type ParsedEventSource = ({ from: 'rule' } & RuleOpts) | { from: 'event-set'; eventSetId: string };
 
 /** Events for a figure, with the clause that says where they came from. */
 export interface ResolvedEvents {
@@ -18,15 +26,11 @@ export interface ResolvedEvents {
  * period, climatology, detrend and standardize), smoothed by the rule's running mean in place of
  * the anomaly's own smoothing so that the index is not smoothed twice.
  */
-export function eventsByRule(index: LoadedSeries, a: AnomalyOpts, rule: RuleOpts): ResolvedEvents {
+export function eventsByRule(index: LoadedSeries, a: ParsedAnomalyOptions, rule: RuleOpts): ResolvedEvents {
   const anom = seriesAnomaly(index, a, ['smooth']);
-  const { events } = detectEvents({
-    index: { start: anom.start, values: anom.values },
-    threshold: rule.threshold,
-    minDuration: rule.minDuration,
-    smooth: rule.smooth,
-    roundTo: rule.roundTo,
-  });
+  // The rule's options are the engine's, field for field (one definition: the schema's rule).
+  const { threshold, minDuration, smooth, roundTo } = rule;
+  const { events } = detectEvents({ index: { start: anom.start, values: anom.values }, threshold, minDuration, smooth, roundTo } satisfies EventsInput);
   return {
     events: events.map((e) => ({ ...e, label: '' })),
     clause: `${describeRule(rule)}, on ${index.name} ${describeAnomaly(a, { skip: ['smooth'] })}`,
@@ -39,7 +43,7 @@ export function eventsByRule(index: LoadedSeries, a: AnomalyOpts, rule: RuleOpts
  * smoothing included) at the set's peak month, since a set records months, not values; null where
  * the index has no value there.
  */
-export function eventsFromSet(set: LoadedEventSet, index: LoadedSeries, a: AnomalyOpts): ResolvedEvents {
+export function eventsFromSet(set: LoadedEventSet, index: LoadedSeries, a: ParsedAnomalyOptions): ResolvedEvents {
   const anom = seriesAnomaly(index, a);
   const first = parseMonth(anom.start);
   const events = set.events.map((e): FigureEvent => {
@@ -64,7 +68,7 @@ export function eventsFromSet(set: LoadedEventSet, index: LoadedSeries, a: Anoma
 }
 
 /** Events by a recipe's source: the rule on the index, or the notebook's saved set (already loaded). */
-export function resolveEvents(source: ParsedEventSource, index: LoadedSeries, a: AnomalyOpts, set: LoadedEventSet | null): ResolvedEvents {
+export function resolveEvents(source: ParsedEventSource, index: LoadedSeries, a: ParsedAnomalyOptions, set: LoadedEventSet | null): ResolvedEvents {
   if (source.from === 'rule') return eventsByRule(index, a, source);
   // The service loads the set whenever a recipe names one; missing here would be a bug.
   if (!set) throw new Error('event set was not loaded');

@@ -1,5 +1,15 @@
 import { BadRequestException, Injectable } from '@nestjs/common';
-import { AnalysisInputError, ENGINE_VERSION, UnitError, type ComputeFigureRequest, type FigureResult, type ParsedFigureRecipe, type UsedSeries } from '@upwell/common';
+import {
+  AnalysisInputError,
+  ENGINE_VERSION,
+  FIGURE_REGISTRY,
+  MODEL_OUTPUT_CAUTION,
+  UnitError,
+  type ComputeFigureRequest,
+  type FigureResult,
+  type ParsedFigureRecipe,
+  type UsedSeries,
+} from '@upwell/common';
 import { NotebookPolicy } from '../notebooks/notebook.policy';
 import type { User } from '../users/user.entity';
 import { figureCacheKey } from './cache-key';
@@ -7,7 +17,6 @@ import { FigureCache } from './figure-cache';
 import { FigureInputsService, type ResolvedEventSet } from './figure-inputs.service';
 import { presentFigureJson } from './figures.presenter';
 import type { RecipeInputs, RecipeOutput } from './loaded-inputs';
-import { MODEL_OUTPUT_CAUTION } from './methods';
 import { RECIPES } from './recipes';
 import type { FigureRecipeHandler } from './recipes/recipe';
 
@@ -64,8 +73,11 @@ export class FiguresService {
       zonalField: field && (await this.inputs.loadZonalField(field)),
     };
     const output: RecipeOutput = runEngine(() => handler.compute(recipe as never, inputs));
+    // The edge checks what it sends: the data must be exactly the kind's result shape, which the web's chart reads.
+    const checked = FIGURE_REGISTRY.definition(recipe.kind).result.safeParse(output.data);
+    if (!checked.success) throw new Error(`the ${recipe.kind} recipe computed data its result schema refuses: ${checked.error.message}`);
     const used = usedOf(inputs);
-    const stored: Omit<FigureResult, 'cached'> = {
+    const stored = {
       kind: recipe.kind,
       data: output.data,
       numbers: output.numbers,
@@ -75,7 +87,7 @@ export class FiguresService {
       warnings: [...new Set(output.warnings)],
       engineVersion: ENGINE_VERSION,
       cacheKey,
-    };
+    } as Omit<FigureResult, 'cached'>;
     const json = JSON.stringify(stored);
     this.cache.set(cacheKey, json);
     return presentFigureJson(json, false);

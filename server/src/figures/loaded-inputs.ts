@@ -1,4 +1,4 @@
-import type { FigureEvent, UsedSeries } from '@upwell/common';
+import type { FigureDataOf, FigureKind, FigureNumber, UsedSeries } from '@upwell/common';
 
 /** A bound series resolved to one version, with its values. */
 export interface LoadedSeries extends UsedSeries {
@@ -38,14 +38,11 @@ export interface NamedBinding {
   version: 'latest' | number;
 }
 
-/** What a recipe gives back; the service adds used, cautions about origin, key and engine version. */
-export interface RecipeOutput {
-  data: Record<string, unknown>;
-  numbers: { key: string; label: string; value: number | null; units: string }[];
+/** What a recipe gives back: exactly its kind's data; the service adds used, cautions about origin, key and engine version. */
+export interface RecipeOutput<K extends FigureKind = FigureKind> {
+  data: FigureDataOf<K>;
+  numbers: FigureNumber[];
   methods: string;
   cautions: string[];
   warnings: string[];
 }
-
-/** Shorthand for the events a recipe passes on. */
-export type { FigureEvent };

@@ -3,7 +3,7 @@
  * with every term converted to the tendency's unit (engine `unitFactor`; a term whose unit cannot
  * be converted is a 400 naming both units).
  *
- * data: BudgetData — `months` [{ month, tendency, sumOfTerms, residual }] for lines, `terms`
+ * data: BudgetData (common/src/figure-kinds/budget) — `months` [{ month, tendency, sumOfTerms, residual }] for lines, `terms`
  * [{ month, term, value }] for a stacked area or bars, `termNames`, `rmsResidual`, `relativeResidual`.
  *
  * numbers:
@@ -11,9 +11,8 @@
  * - `rmsResidual` — tendency units
  * - `meanResidual` — mean residual, tendency units
  */
-import { AnalysisInputError, budget, mean, parseMonth, unitFactor, type MonthlySeries } from '@upwell/common';
+import { AnalysisInputError, budget, budgetMethods, mean, parseMonth, unitFactor, type MonthlySeries } from '@upwell/common';
 import { seriesAt } from '../series-input';
-import { methodsSentence } from '../methods';
 import { bindingAt, monthRecords, type FigureRecipeHandler } from './recipe';
 
 /** The factor from one unit to another; identical spellings (also empty ones) need no parsing. */
@@ -59,14 +58,7 @@ export const budgetRecipe: FigureRecipeHandler<'budget'> = {
         { key: 'rmsResidual', label: 'Root-mean-square budget residual', value: b.rmsResidual, units: tendency.units },
         { key: 'meanResidual', label: 'Mean budget residual', value: mean(b.residual.values), units: tendency.units },
       ],
-      methods: methodsSentence(
-        [
-          `budget closure of ${tendency.name} against the sum of ${names.join(', ')}, month by month on the tendency's months`,
-          converted.length ? `terms converted to ${tendency.units} (${converted.join('; ')})` : '',
-          'residual = tendency − Σ terms; relative residual = rms(residual)/rms(tendency) over the months where the residual exists',
-        ],
-        [tendency, ...terms.map((t) => t.s)],
-      ),
+      methods: budgetMethods(tendency, terms.map((t) => ({ name: t.name, series: t.s })), converted),
       cautions: [],
       warnings: [],
     };

@@ -2,7 +2,7 @@
  * Composite recipe: the series anomaly around the peak of each event of one phase (superposed
  * epoch, engine `composite`), with the mean, its t-interval and every member.
  *
- * data: CompositeData — `events` (the members' events), `offsets` [{ offset, mean, lower, upper, n }],
+ * data: CompositeData (common/src/figure-kinds/composite) — `events` (the members' events), `offsets` [{ offset, mean, lower, upper, n }],
  * `members` [{ event (peak month), offset, value }] for one line per event.
  *
  * numbers:
@@ -10,11 +10,10 @@
  * - `peak.offset` — its offset from the event peaks, months (positive: after)
  * - `events.count` — number of events composited
  */
-import { composite } from '@upwell/common';
+import { composite, compositeMethods, CORRELATION_CAUTION } from '@upwell/common';
 import { seriesAnomaly } from '../figure-anomaly';
 import { resolveEvents } from '../figure-events';
 import { seriesAt } from '../series-input';
-import { CORRELATION_CAUTION, describeAnomaly, methodsSentence } from '../methods';
 import { bindingAt, type FigureRecipeHandler } from './recipe';
 
 /** The composite recipe. */
@@ -34,7 +33,6 @@ export const compositeRecipe: FigureRecipeHandler<'composite'> = {
     const units = r.anomaly.standardize ? 'standard deviations' : series.units;
     const warnings = [...anom.warnings, ...ev.warnings.filter((w) => !anom.warnings.includes(w))];
     if (events.length === 0) warnings.push(`no ${r.phase} events to composite`);
-    const pct = Math.round(r.confidence * 1000) / 10;
     return {
       data: { phase: r.phase, units, confidence: r.confidence, events, offsets, members },
       numbers: [
@@ -42,14 +40,7 @@ export const compositeRecipe: FigureRecipeHandler<'composite'> = {
         { key: 'peak.offset', label: 'Months from the event peak to the largest composite anomaly', value: peak?.offset ?? null, units: 'months' },
         { key: 'events.count', label: `Number of ${r.phase} events composited`, value: events.length, units: 'events' },
       ],
-      methods: methodsSentence(
-        [
-          `composite of ${series.name} ${describeAnomaly(r.anomaly)}, from ${r.before} months before to ${r.after} months after the peak of each ${r.phase} event`,
-          ev.clause,
-          `${pct}% interval as mean ± t·s/√n over the events present at each offset`,
-        ],
-        [index, series],
-      ),
+      methods: compositeMethods(r, index, series, ev.clause),
       cautions: [CORRELATION_CAUTION],
       warnings,
     };

@@ -5,7 +5,7 @@
  * recipe's base period, climatology and detrend, but are neither standardized (they keep their
  * units) nor smoothed (the months are summed as measured).
  *
- * data: EventTableData — `carbonSeries` [{ seriesId, name, units, treatment }], `rows` [FigureEvent &
+ * data: EventTableData (common/src/figure-kinds/event-table) — `carbonSeries` [{ seriesId, name, units, treatment }], `rows` [FigureEvent &
  * { carbon: { [seriesId]: Pg C | null } }].
  *
  * numbers:
@@ -19,9 +19,8 @@ import { seriesAnomaly } from '../figure-anomaly';
 import { resolveEvents } from '../figure-events';
 import { seriesAt } from '../series-input';
 import { carbonChange, planCarbonChange } from '../carbon-change';
-import { describeAnomaly, methodsSentence } from '../methods';
+import { eventTableMethods, type FigureNumber } from '@upwell/common';
 import { bindingAt, type FigureRecipeHandler } from './recipe';
-import type { RecipeOutput } from '../loaded-inputs';
 
 /** The event-table recipe. */
 export const eventTableRecipe: FigureRecipeHandler<'event-table'> = {
@@ -43,7 +42,7 @@ export const eventTableRecipe: FigureRecipeHandler<'event-table'> = {
       }
       return { ...e, carbon: cells };
     });
-    const numbers: RecipeOutput['numbers'] = [
+    const numbers: FigureNumber[] = [
       { key: 'events.count', label: 'Number of events', value: rows.length, units: 'events' },
       { key: 'events.warm.count', label: 'Number of warm events', value: rows.filter((e) => e.phase === 'warm').length, units: 'events' },
       { key: 'events.cold.count', label: 'Number of cold events', value: rows.filter((e) => e.phase === 'cold').length, units: 'events' },
@@ -64,14 +63,10 @@ export const eventTableRecipe: FigureRecipeHandler<'event-table'> = {
       { key: 'strongest.months', label: `Duration of the strongest event${at}`, value: strongest?.months ?? null, units: 'months' },
       ...carbon.map((c) => ({ key: `strongest.${c.seriesId}.PgC`, label: `Change of ${c.name} over the strongest event${at}`, value: strongest ? strongest.carbon[c.seriesId] : null, units: 'Pg C' })),
     );
-    const carbonClause = carbon.length
-      ? `carbon change in Pg C over each event's months from ${carbon.map((c) => c.name).join(', ')} ${describeAnomaly(r.anomaly, { skip: ['standardize', 'smooth'] })}: ` +
-        'a rate by integrating its anomaly over the event (calendar month lengths, Julian year of 365.25 days), an inventory as its anomaly at the end minus at the start'
-      : '';
     return {
       data: { carbonSeries: plans.map(({ c, plan }) => ({ seriesId: c.seriesId, name: c.name, units: c.units, treatment: plan.treatment })), rows },
       numbers,
-      methods: methodsSentence([ev.clause, carbonClause], [index, ...carbon]),
+      methods: eventTableMethods(r, index, carbon, ev.clause),
       cautions: [],
       warnings,
     };

@@ -2,14 +2,13 @@
  * Time–latitude (Hovmöller) recipe: a stored zonal mean, raw or as anomalies of each latitude
  * against its own base-period monthly-mean climatology (engine `anomaly`, WMO-No. 1203 rule).
  *
- * data: HovmollerData — `latitudes` (south to north), `cells` [{ month, lat, value }], time-major.
+ * data: HovmollerData (common/src/figure-kinds/hovmoller) — `latitudes` (south to north), `cells` [{ month, lat, value }], time-major.
  *
  * numbers:
  * - `max.value`, `min.value` — largest / smallest value shown, field units
  * - `max.lat`, `min.lat` — their latitude, degrees north
  */
-import { anomaly, formatMonth, parseMonth } from '@upwell/common';
-import { describePeriod, methodsSentence } from '../methods';
+import { anomaly, formatMonth, hovmollerMethods, parseMonth } from '@upwell/common';
 import type { FigureRecipeHandler } from './recipe';
 
 /** The Hovmöller recipe. */
@@ -52,14 +51,7 @@ export const hovmollerRecipe: FigureRecipeHandler<'hovmoller'> = {
         { key: 'min.value', label: `Smallest ${r.show === 'anomaly' ? 'anomaly' : 'value'} of ${f.used.name}`, value: min?.value ?? null, units: f.used.units },
         { key: 'min.lat', label: 'Latitude of the smallest value', value: min?.lat ?? null, units: 'degrees_north' },
       ],
-      methods: methodsSentence(
-        [
-          r.show === 'anomaly'
-            ? `zonal mean ${f.used.name} as anomalies of each latitude against its ${describePeriod(r.base)} monthly-mean climatology (a calendar month needs values in 80% of base-period years, WMO-No. 1203)`
-            : `zonal mean ${f.used.name} as stored`,
-        ],
-        [f.used],
-      ),
+      methods: hovmollerMethods(r, f.used),
       cautions: [],
       warnings: [...warnings],
     };

@@ -3,16 +3,15 @@
  * (engine `lagCorrelation`; positive lag: the index leads the series), with the |r| needed for
  * significance at alpha from each lag's nEff (engine `significanceThreshold`).
  *
- * data: LagCorrelationData — `lags` [{ lag, r, n, nEff, p, threshold }], `strongest` (largest |r|).
+ * data: LagCorrelationData (common/src/figure-kinds/lag-correlation) — `lags` [{ lag, r, n, nEff, p, threshold }], `strongest` (largest |r|).
  *
  * numbers:
  * - `strongest.lag` (months), `strongest.r`, `strongest.p`, `strongest.nEff`, `strongest.n`
  * - `lag0.r` — correlation without lag
  */
-import { lagCorrelation, significanceThreshold } from '@upwell/common';
+import { CORRELATION_CAUTION, lagCorrelation, lagCorrelationMethods, significanceThreshold, type LagCorrelationInput, type LagRow } from '@upwell/common';
 import { seriesAnomaly } from '../figure-anomaly';
 import { seriesAt } from '../series-input';
-import { CORRELATION_CAUTION, describeAnomaly, methodsSentence, NEFF_FORM } from '../methods';
 import { bindingAt, type FigureRecipeHandler } from './recipe';
 
 /** The lag-correlation recipe. */
@@ -24,8 +23,9 @@ export const lagCorrelationRecipe: FigureRecipeHandler<'lag-correlation'> = {
     const series = seriesAt(inputs, 'series');
     const x = seriesAnomaly(index, r.anomaly);
     const y = seriesAnomaly(series, r.anomaly);
-    const { lags } = lagCorrelation({ x, y, maxLag: r.maxLag, method: r.method });
-    const rows = lags.map((l) => ({ ...l, threshold: l.nEff === null ? null : significanceThreshold(l.nEff, r.alpha) }));
+    const { lags } = lagCorrelation({ x, y, maxLag: r.maxLag, method: r.method } satisfies LagCorrelationInput);
+    // The engine's row plus its threshold is the kind's LagRow: one definition of a lag row.
+    const rows = lags.map((l) => ({ ...l, threshold: l.nEff === null ? null : significanceThreshold(l.nEff, r.alpha) }) satisfies LagRow);
     // First of equal |r| wins, so the answer does not depend on floating-point ties' order.
     const strongest = rows.reduce<(typeof rows)[number] | null>((a, b) => (b.r !== null && (a === null || Math.abs(b.r) > Math.abs(a.r!)) ? b : a), null);
     const zero = rows.find((l) => l.lag === 0)!;
@@ -39,14 +39,7 @@ export const lagCorrelationRecipe: FigureRecipeHandler<'lag-correlation'> = {
         { key: 'strongest.n', label: 'Pairs at the strongest lag', value: strongest?.n ?? null, units: 'pairs' },
         { key: 'lag0.r', label: 'Correlation without lag', value: zero.r, units: '' },
       ],
-      methods: methodsSentence(
-        [
-          `${r.method === 'spearman' ? 'Spearman rank' : 'Pearson'} correlation of ${index.name} and ${series.name} ${describeAnomaly(r.anomaly)}, at lags −${r.maxLag} to +${r.maxLag} months (positive: ${index.name} leads)`,
-          `two-sided t-test p-values with ${NEFF_FORM}`,
-          `significance threshold |r| at alpha = ${r.alpha} from each lag's nEff`,
-        ],
-        [index, series],
-      ),
+      methods: lagCorrelationMethods(r, index, series),
       cautions: [CORRELATION_CAUTION],
       warnings: [...x.warnings, ...y.warnings],
     };

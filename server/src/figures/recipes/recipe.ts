@@ -1,16 +1,13 @@
-import { formatMonth, parseMonth, type MonthValue, type ParsedFigureRecipe } from '@upwell/common';
+import { formatMonth, parseMonth, type FigureKind, type MonthValue, type RecipeOf } from '@upwell/common';
 import type { NamedBinding, RecipeInputs, RecipeOutput } from '../loaded-inputs';
 
-/** The parsed recipe of one kind. */
-export type RecipeOf<K extends ParsedFigureRecipe['kind']> = Extract<ParsedFigureRecipe, { kind: K }>;
-
-/** One figure kind: which series it binds, and how it computes its result from them. */
-export interface FigureRecipeHandler<K extends ParsedFigureRecipe['kind']> {
+/** One figure kind's compute: which series it binds, and how it computes its result from them. */
+export interface FigureRecipeHandler<K extends FigureKind> {
   kind: K;
   /** Every series binding of the recipe, with the path that names it in messages. */
   bindings(recipe: RecipeOf<K>): NamedBinding[];
   /** Pure computation over resolved inputs; engine errors propagate to the service. */
-  compute(recipe: RecipeOf<K>, inputs: RecipeInputs): RecipeOutput;
+  compute(recipe: RecipeOf<K>, inputs: RecipeInputs): RecipeOutput<K>;
 }
 
 /** A binding at a path. */

@@ -2,7 +2,7 @@
  * Scatter recipe: pairs (index anomaly at month t, series anomaly at t + lag), aligned by calendar
  * month, with the ordinary-least-squares line of the series on the index (engine `ols`).
  *
- * data: ScatterData — `points` [{ month (the index month t), x, y }] where both are present,
+ * data: ScatterData (common/src/figure-kinds/scatter) — `points` [{ month (the index month t), x, y }] where both are present,
  * `fit` { slope, intercept, slopeStdErr, r2, n }, `line` two points spanning the x range.
  *
  * numbers:
@@ -10,10 +10,9 @@
  * - `intercept` — series units
  * - `r2`, `n` (pairs)
  */
-import { formatMonth, ols, parseMonth } from '@upwell/common';
+import { CORRELATION_CAUTION, formatMonth, ols, parseMonth, scatterMethods } from '@upwell/common';
 import { seriesAnomaly } from '../figure-anomaly';
 import { seriesAt } from '../series-input';
-import { CORRELATION_CAUTION, describeAnomaly, methodsSentence } from '../methods';
 import { bindingAt, type FigureRecipeHandler } from './recipe';
 
 /** The scatter recipe. */
@@ -49,13 +48,7 @@ export const scatterRecipe: FigureRecipeHandler<'scatter'> = {
         { key: 'r2', label: 'Coefficient of determination R²', value: fit.r2, units: '' },
         { key: 'n', label: 'Pairs', value: fit.n, units: 'pairs' },
       ],
-      methods: methodsSentence(
-        [
-          `${series.name} against ${index.name} ${describeAnomaly(r.anomaly)}, ${series.name} taken ${r.lag} month${Math.abs(r.lag) === 1 ? '' : 's'} after ${index.name}`,
-          'line by ordinary least squares of the series on the index',
-        ],
-        [index, series],
-      ),
+      methods: scatterMethods(r, index, series),
       cautions: [CORRELATION_CAUTION],
       warnings: [...x.warnings, ...y.warnings],
     };

@@ -1,7 +1,7 @@
 /**
  * Seasonal-cycle recipe: the climatology of each calendar month over the base period with its spread.
  *
- * data: SeasonalCycleData — `months` [{ month (1 = January), name, mean, sd, min, max, n, years }]:
+ * data: SeasonalCycleData (common/src/figure-kinds/seasonal-cycle) — `months` [{ month (1 = January), name, mean, sd, min, max, n, years }]:
  * mean as engine `monthlyClimatology` gives it (null when fewer than 80% of the base-period years
  * have a value, WMO-No. 1203), sd the sample standard deviation (n − 1, Welford) — null with the mean
  * or when n < 2 — min/max of the present values, n present values, years the month's base-period years.
@@ -10,9 +10,8 @@
  * - `amplitude` — largest minus smallest monthly mean, series units
  * - `max.month`, `min.month` — calendar month (1–12) of the largest / smallest mean
  */
-import { baseMonthStats, monthlyClimatology, MONTH_NAMES, parseMonth, sampleSd, toFloat64 } from '@upwell/common';
+import { baseMonthStats, describePeriod, monthlyClimatology, MONTH_NAMES, parseMonth, sampleSd, seasonalCycleMethods, toFloat64 } from '@upwell/common';
 import { seriesAt } from '../series-input';
-import { describePeriod, methodsSentence } from '../methods';
 import { bindingAt, type FigureRecipeHandler } from './recipe';
 
 /** The seasonal-cycle recipe. */
@@ -56,13 +55,7 @@ export const seasonalCycleRecipe: FigureRecipeHandler<'seasonal-cycle'> = {
         { key: 'max.month', label: 'Calendar month of the largest mean (1 = January)', value: hi?.month ?? null, units: 'month' },
         { key: 'min.month', label: 'Calendar month of the smallest mean (1 = January)', value: lo?.month ?? null, units: 'month' },
       ],
-      methods: methodsSentence(
-        [
-          `monthly-mean climatology of ${s.name} over ${describePeriod(r.base)} (a calendar month needs values in 80% of base-period years, WMO-No. 1203)`,
-          'spread as the sample standard deviation (n − 1) and the range of each calendar month’s values',
-        ],
-        [s],
-      ),
+      methods: seasonalCycleMethods(r, s),
       cautions: [],
       warnings,
     };

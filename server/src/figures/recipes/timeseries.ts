@@ -2,18 +2,17 @@
  * Timeseries recipe: a series (raw or anomalies) with its linear trend, and warm/cold events of an
  * index (the series itself when no index is bound) shaded behind it.
  *
- * data: TimeseriesData — `points` [{ month, value }], `events` [{ phase, start, peak, end, months,
+ * data: TimeseriesData (common/src/figure-kinds/timeseries) — `points` [{ month, value }], `events` [{ phase, start, peak, end, months,
  * peakValue, strength, label }], `trend` { perDecade, perDecadeStdErr, r2, n } of the values shown.
  *
  * numbers:
  * - `trend.perDecade` — OLS slope of the shown values, series units per decade
  * - `events.warm.count`, `events.cold.count` — number of warm / cold events
  */
-import { trend } from '@upwell/common';
+import { timeseriesMethods, trend } from '@upwell/common';
 import { seriesAnomaly } from '../figure-anomaly';
 import { resolveEvents } from '../figure-events';
 import { seriesAt } from '../series-input';
-import { describeAnomaly, methodsSentence } from '../methods';
 import { bindingAt, monthRecords, type FigureRecipeHandler } from './recipe';
 
 /** The timeseries recipe. */
@@ -49,14 +48,7 @@ export const timeseriesRecipe: FigureRecipeHandler<'timeseries'> = {
         { key: 'events.warm.count', label: 'Number of warm events', value: count('warm'), units: 'events' },
         { key: 'events.cold.count', label: 'Number of cold events', value: count('cold'), units: 'events' },
       ],
-      methods: methodsSentence(
-        [
-          r.show === 'anomaly' ? `${series.name} as ${describeAnomaly(r.anomaly)}` : `${series.name} as stored`,
-          'trend by ordinary least squares, per decade',
-          `shaded ${ev.clause}`,
-        ],
-        used,
-      ),
+      methods: timeseriesMethods(r, series, ev.clause, used),
       cautions: [],
       warnings,
     };

@@ -1,4 +1,4 @@
-import { specForResult, type FigureRecipe, type FigureResult } from '@upwell/common';
+import { specForResult, type FigureResult } from '@upwell/common';
 
 // vega and vega-lite are ESM-only; the CommonJS build keeps import() as import() (module: node20).
 type Vega = typeof import('vega');
@@ -12,8 +12,8 @@ export const SNAPSHOT_FIGURE_WIDTH = 640;
  * The frozen figure as an SVG document, drawn headless with the same vega-lite spec builders
  * the web uses; null for kinds drawn as a table (the event table).
  */
-export async function figureSvg(recipe: Record<string, unknown>, result: FigureResult): Promise<string | null> {
-  const spec = specForResult(recipe as FigureRecipe, result);
+export async function figureSvg(result: FigureResult): Promise<string | null> {
+  const spec = specForResult(result);
   if (!spec) return null;
   libraries ??= Promise.all([import('vega'), import('vega-lite')]);
   const [vega, vl] = await libraries;

@@ -1,4 +1,4 @@
-import { canonicalJSON, FIGURE_KIND_LABELS, formatValue, readFigureData, type FigureKind, type FrozenFigure } from '@upwell/common';
+import { canonicalJSON, FIGURE_KIND_LABELS, FIGURE_REGISTRY, figureData, formatValue, type EventTableData, type FrozenFigure } from '@upwell/common';
 import { escapeHtml } from './escape';
 import { figureSvg } from './figure-svg';
 
@@ -6,16 +6,15 @@ import { figureSvg } from './figure-svg';
 const SHA_PREFIX = 12;
 
 /** The event table as a plain HTML table (it is a table in the editor too). */
-function eventTableHtml(figure: FrozenFigure): string {
-  const data = readFigureData('event-table', figure.result!);
-  if (data.events.length === 0) return '<p>No events met the rule in this period.</p>';
-  const carbon = data.events[0]?.carbon ?? [];
-  const cell = (v: number | null, p: number) => (v === null ? '—' : escapeHtml(formatValue(v, p)));
+function eventTableHtml(data: EventTableData): string {
+  if (data.rows.length === 0) return '<p>No events met the rule in this period.</p>';
+  const carbon = data.carbonSeries;
+  const cell = (v: number | null | undefined, p: number) => (v === null || v === undefined ? '—' : escapeHtml(formatValue(v, p)));
   const head = ['Phase', 'Start', 'Peak', 'End', 'Months', 'Peak value', 'Strength', ...carbon.map((c) => `${c.name} (Pg C)`)];
-  const rows = data.events.map((e) =>
+  const rows = data.rows.map((e) =>
     [e.phase, e.start, e.peak, e.end, String(e.months)].map((v) => `<td>${escapeHtml(v)}</td>`).join('') +
-    `<td>${cell(e.peakValue, 2)}</td><td>${escapeHtml(e.strength)}</td>` +
-    e.carbon.map((c) => `<td>${cell(c.PgC, 3)}</td>`).join(''),
+    `<td>${cell(e.peakValue, 2)}</td><td>${escapeHtml(e.strength ?? '')}</td>` +
+    carbon.map((c) => `<td>${cell(e.carbon[c.seriesId], 3)}</td>`).join(''),
   );
   return `<table><thead><tr>${head.map((h) => `<th>${escapeHtml(h)}</th>`).join('')}</tr></thead><tbody>${rows.map((r) => `<tr>${r}</tr>`).join('')}</tbody></table>`;
 }
@@ -37,12 +36,12 @@ export async function frozenFigureHtml(figure: FrozenFigure): Promise<string> {
     return `<figure class="live-figure"><p class="figure-error">This figure could not be computed when the snapshot was published: ${escapeHtml(figure.error ?? 'unknown reason')}</p><figcaption><strong>${label}</strong> ${escapeHtml(caption)}</figcaption></figure>`;
   }
   const r = figure.result;
-  const kind = FIGURE_KIND_LABELS[r.kind as FigureKind] ?? r.kind;
+  const kind = FIGURE_REGISTRY.has(r.kind) ? FIGURE_KIND_LABELS[r.kind] : r.kind;
   let picture: string;
   if (r.kind === 'event-table') {
-    picture = eventTableHtml(figure);
+    picture = eventTableHtml(figureData('event-table', r));
   } else {
-    const svg = await figureSvg(figure.recipe, r);
+    const svg = await figureSvg(r);
     picture = svg
       ? `<img src="data:image/svg+xml;base64,${Buffer.from(svg, 'utf8').toString('base64')}" alt="${escapeHtml(`${label} ${kind}${caption ? `: ${caption}` : ''}`)}">`
       : '';
