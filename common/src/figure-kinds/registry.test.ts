@@ -34,6 +34,7 @@ describe('figure-kind registry', () => {
   it('reads bounds from the schema checks, for forms', () => {
     expect(numberBounds(lagCorrelationRecipeSchema, ['maxLag'])).toEqual({ min: 0, max: 60 });
     expect(numberBounds(lagCorrelationRecipeSchema, ['anomaly', 'smooth'])).toEqual({ min: 1, max: 61 });
+    expect(numberBounds(FIGURE_REGISTRY.definition('composite').recipe, ['events', 'minDuration'])).toEqual({ min: 1, max: 60 });
     expect(arrayMax(FIGURE_REGISTRY.definition('budget').recipe, ['terms'])).toBe(12);
   });
 

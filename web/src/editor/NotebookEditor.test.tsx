@@ -10,7 +10,7 @@ import { NotebookEditor } from './NotebookEditor';
 
 afterEach(() => vi.unstubAllGlobals());
 
-const figureResult = result('timeseries', { points: [], events: [], units: 'Pg C', show: 'anomaly' }, {
+const figureResult = result('timeseries', { points: [], events: [], units: 'Pg C', show: 'anomaly', trend: { perDecade: null, perDecadeStdErr: null, r2: null, n: 0 } }, {
   numbers: [{ key: 'trend', label: 'linear trend', value: -0.4213, units: 'Pg C decade⁻¹' }],
 });
 

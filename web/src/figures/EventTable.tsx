@@ -1,11 +1,11 @@
-import { formatValue, type EventTablePlotData } from '@upwell/common';
+import { formatValue, type EventTableData } from '@upwell/common';
 
-const cell = (v: number | null, p: number) => (v === null ? '—' : formatValue(v, p));
+const cell = (v: number | null | undefined, p: number) => (v === null || v === undefined ? '—' : formatValue(v, p));
 
 /** The event table as an HTML table (reads and prints as text, copies into a manuscript). */
-export function EventTable({ data, label }: { data: EventTablePlotData; label: string }) {
-  const carbon = data.events[0]?.carbon ?? [];
-  if (data.events.length === 0) {
+export function EventTable({ data, label }: { data: EventTableData; label: string }) {
+  const carbon = data.carbonSeries;
+  if (data.rows.length === 0) {
     return <p className="upwell-figure-empty">No events met the rule in this period. Try a lower threshold or a shorter minimum duration.</p>;
   }
   return (
@@ -17,7 +17,7 @@ export function EventTable({ data, label }: { data: EventTablePlotData; label: s
           <th scope="col">Peak</th>
           <th scope="col">End</th>
           <th scope="col">Months</th>
-          <th scope="col">Peak index{data.indexUnits ? ` (${data.indexUnits})` : ''}</th>
+          <th scope="col">Peak index</th>
           <th scope="col">Strength</th>
           {carbon.map((c) => (
             <th scope="col" key={c.seriesId}>
@@ -27,7 +27,7 @@ export function EventTable({ data, label }: { data: EventTablePlotData; label: s
         </tr>
       </thead>
       <tbody>
-        {data.events.map((e) => (
+        {data.rows.map((e) => (
           <tr key={`${e.phase}-${e.start}`}>
             <th scope="row" className={`upwell-phase upwell-phase-${e.phase}`}>
               {e.phase === 'warm' ? 'Warm' : 'Cold'}
@@ -37,9 +37,9 @@ export function EventTable({ data, label }: { data: EventTablePlotData; label: s
             <td>{e.end}</td>
             <td>{e.months}</td>
             <td>{cell(e.peakValue, 2)}</td>
-            <td>{e.strength}</td>
-            {e.carbon.map((c) => (
-              <td key={c.seriesId}>{cell(c.PgC, 2)}</td>
+            <td>{e.strength ?? ''}</td>
+            {carbon.map((c) => (
+              <td key={c.seriesId}>{cell(e.carbon[c.seriesId], 2)}</td>
             ))}
           </tr>
         ))}

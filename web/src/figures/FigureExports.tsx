@@ -1,12 +1,12 @@
 import { Button, Flex, Text } from '@radix-ui/themes';
 import { useState } from 'react';
-import type { FigureKind, FigureResult } from '@upwell/common';
+import type { FigureResult } from '@upwell/common';
 import type { VisualizationSpec } from 'vega-embed';
 import { figureCsv } from './csv';
 import { exportName, figurePngUrl, figureSvg, saveFile } from './exports';
 
 /** Download buttons of one figure: SVG and PNG of the chart (if it has one) and its data as CSV. */
-export function FigureExports({ kind, result, spec, baseName }: { kind: FigureKind; result: FigureResult; spec: VisualizationSpec | null; baseName: string }) {
+export function FigureExports({ result, spec, baseName }: { result: FigureResult; spec: VisualizationSpec | null; baseName: string }) {
   const [busy, setBusy] = useState<string | null>(null);
   const [error, setError] = useState<string | null>(null);
   const run = async (what: string, make: () => Promise<void>) => {
@@ -32,7 +32,7 @@ export function FigureExports({ kind, result, spec, baseName }: { kind: FigureKi
           </Button>
         </>
       )}
-      <Button size="1" variant="soft" color="gray" onClick={() => run('CSV', async () => saveFile(`${baseName}.csv`, figureCsv(kind, result), 'text/csv'))}>
+      <Button size="1" variant="soft" color="gray" onClick={() => run('CSV', async () => saveFile(`${baseName}.csv`, figureCsv(result), 'text/csv'))}>
         Download data (CSV)
       </Button>
       {error && (

@@ -1,5 +1,5 @@
 import { useMemo } from 'react';
-import { formatVersionsUsed, readFigureData, specForResult, type FigureResult, type ParsedFigureRecipe } from '@upwell/common';
+import { figureData, formatVersionsUsed, specForResult, type FigureResult } from '@upwell/common';
 import { LazyVegaFigure } from '../charts/LazyVegaFigure';
 import { EventTable } from './EventTable';
 
@@ -32,8 +32,8 @@ export function MethodsNote({ result }: { result: FigureResult }) {
 }
 
 /** The picture of a computed result: a vega-lite chart, or the event table. Renders from the result alone, without fetching. */
-export function FigureChart({ recipe, result, label }: { recipe: ParsedFigureRecipe; result: FigureResult; label: string }) {
-  const spec = useMemo(() => specForResult(recipe, result), [recipe, result]);
-  if (recipe.kind === 'event-table') return <EventTable data={readFigureData('event-table', result)} label={label} />;
+export function FigureChart({ result, label }: { result: FigureResult; label: string }) {
+  const spec = useMemo(() => specForResult(result), [result]);
+  if (result.kind === 'event-table') return <EventTable data={figureData('event-table', result)} label={label} />;
   return spec ? <LazyVegaFigure spec={spec} label={label} /> : null;
 }

@@ -14,9 +14,10 @@ const recipe = {
 const eventTable = result(
   'event-table',
   {
-    events: [
-      { phase: 'warm', start: '1997-05', peak: '1997-12', end: '1998-05', months: 13, peakValue: 2.4, strength: 'very strong', carbon: [{ seriesId: SERIES_ID, name: 'DIC 0–100 m', PgC: -0.4213 }] },
-      { phase: 'cold', start: '1998-07', peak: '1999-01', end: '2000-03', months: 21, peakValue: -1.6, strength: 'strong', carbon: [{ seriesId: SERIES_ID, name: 'DIC 0–100 m', PgC: 0.31 }] },
+    carbonSeries: [{ seriesId: SERIES_ID, name: 'DIC 0–100 m', units: 'Pg C', treatment: 'inventory-difference' }],
+    rows: [
+      { phase: 'warm', start: '1997-05', peak: '1997-12', end: '1998-05', months: 13, peakValue: 2.4, strength: 'very strong', label: '', carbon: { [SERIES_ID]: -0.4213 } },
+      { phase: 'cold', start: '1998-07', peak: '1999-01', end: '2000-03', months: 21, peakValue: -1.6, strength: 'strong', label: '', carbon: { [SERIES_ID]: 0.31 } },
     ],
   },
   {
@@ -72,7 +73,8 @@ describe('FigureView', () => {
     await screen.findAllByRole('option', { name: /DIC 0–100 m \(Pg C\) · v3/ });
     fireEvent.change(screen.getByLabelText('Series'), { target: { value: SERIES_ID } });
     fireEvent.submit(screen.getByRole('form', { name: 'Figure settings' }));
-    expect(onRecipeChange).toHaveBeenCalledWith(expect.objectContaining({ kind: 'timeseries', series: { seriesId: SERIES_ID, version: 'latest' } }));
+    // The form validates asynchronously (react-hook-form's zod resolver).
+    await waitFor(() => expect(onRecipeChange).toHaveBeenCalledWith(expect.objectContaining({ kind: 'timeseries', series: { seriesId: SERIES_ID, version: 'latest' } })));
     fireEvent.change(screen.getByLabelText('Caption of Figure 1'), { target: { value: 'DIC anomaly' } });
     expect(onCaptionChange).toHaveBeenCalledWith('DIC anomaly');
   });

@@ -1,6 +1,6 @@
 import { Button, Flex, Spinner, Text } from '@radix-ui/themes';
 import { useEffect, useId, useMemo, useRef, useState } from 'react';
-import { FIGURE_KIND_LABELS, figureRecipeSchema, type FigureKind, type ParsedFigureRecipe, specForResult } from '@upwell/common';
+import { FIGURE_KIND_LABELS, FIGURE_LIMITS, figureRecipeSchema, type ParsedFigureRecipe, specForResult } from '@upwell/common';
 import { useFigure } from '../api/figures';
 import { useSeriesList } from '../api/series';
 import { ErrorNote } from '../components/ErrorNote';
@@ -41,7 +41,7 @@ function Caption({ label, caption, editable, onChange }: { label: string; captio
       aria-label={`Caption of ${label}`}
       placeholder="Say what the figure shows…"
       rows={2}
-      maxLength={2000}
+      maxLength={FIGURE_LIMITS.captionMax}
       value={text}
       onFocus={() => (focused.current = true)}
       onBlur={() => {
@@ -69,9 +69,9 @@ export function FigureView({ notebookId, groupId, figureNumber, recipe, caption,
   const query = useFigure(notebookId, valid);
   const series = useSeriesList(editing ? groupId : undefined, { pageSize: 200 });
   const label = figureNumber ? `Figure ${figureNumber}` : 'Figure';
-  const kindLabel = valid ? FIGURE_KIND_LABELS[valid.kind as FigureKind] : null;
+  const kindLabel = valid ? FIGURE_KIND_LABELS[valid.kind] : null;
   const formId = useId();
-  const spec = useMemo(() => (valid && query.data ? specForResult(valid, query.data) : null), [valid, query.data]);
+  const spec = useMemo(() => (valid && query.data ? specForResult(query.data) : null), [valid, query.data]);
 
   let body: React.ReactNode;
   if (!recipe) {
@@ -101,7 +101,7 @@ export function FigureView({ notebookId, groupId, figureNumber, recipe, caption,
       </Flex>
     );
   } else {
-    body = <FigureChart recipe={valid} result={query.data} label={`${label}: ${kindLabel}`} />;
+    body = <FigureChart result={query.data} label={`${label}: ${kindLabel}`} />;
   }
 
   return (
@@ -122,7 +122,7 @@ export function FigureView({ notebookId, groupId, figureNumber, recipe, caption,
         <strong>{label}.</strong> <Caption label={label} caption={caption} editable={editable} onChange={onCaptionChange} />
       </figcaption>
       {valid && query.data && <MethodsNote result={query.data} />}
-      {valid && query.data && <FigureExports kind={valid.kind} result={query.data} spec={spec} baseName={exportName(figureNumber, kindLabel ?? 'figure')} />}
+      {valid && query.data && <FigureExports result={query.data} spec={spec} baseName={exportName(figureNumber, kindLabel ?? 'figure')} />}
       {othersEditing.length > 0 && (
         <p className="upwell-figure-presence" role="status">
           {othersEditing.join(', ')} {othersEditing.length === 1 ? 'is' : 'are'} changing this figure’s settings.

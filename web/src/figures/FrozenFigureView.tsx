@@ -1,6 +1,6 @@
 import { Flex, Text } from '@radix-ui/themes';
 import { useMemo } from 'react';
-import { FIGURE_KIND_LABELS, figureRecipeSchema, specForResult, type FigureKind, type FigureResult, type UsedSeries } from '@upwell/common';
+import { FIGURE_KIND_LABELS, figureRecipeSchema, specForResult, type FigureResult, type UsedSeries } from '@upwell/common';
 import { recipeParameters, shaPrefix } from '../snapshots/provenance';
 import { exportName } from './exports';
 import { FigureExports } from './FigureExports';
@@ -48,8 +48,8 @@ export function FrozenFigureView({ figure }: { figure: FrozenFigureData }) {
   const parsed = useMemo(() => (figure.recipe ? figureRecipeSchema.safeParse(figure.recipe) : null), [figure.recipe]);
   const recipe = parsed?.success ? parsed.data : null;
   const label = `Figure ${figure.ordinal}`;
-  const kindLabel = recipe ? FIGURE_KIND_LABELS[recipe.kind as FigureKind] : null;
-  const spec = useMemo(() => (recipe && figure.result ? specForResult(recipe, figure.result) : null), [recipe, figure.result]);
+  const kindLabel = recipe ? FIGURE_KIND_LABELS[recipe.kind] : null;
+  const spec = useMemo(() => (recipe && figure.result ? specForResult(figure.result) : null), [recipe, figure.result]);
 
   let body: React.ReactNode;
   if (!figure.result) {
@@ -61,7 +61,7 @@ export function FrozenFigureView({ figure }: { figure: FrozenFigureData }) {
   } else if (!recipe) {
     body = <p className="upwell-figure-empty" role="note">This figure’s settings cannot be read, so its picture cannot be drawn.</p>;
   } else {
-    body = <FigureChart recipe={recipe} result={figure.result} label={`${label}: ${kindLabel}`} />;
+    body = <FigureChart result={figure.result} label={`${label}: ${kindLabel}`} />;
   }
 
   return (
@@ -77,7 +77,7 @@ export function FrozenFigureView({ figure }: { figure: FrozenFigureData }) {
       </figcaption>
       {figure.result && <MethodsNote result={figure.result} />}
       {figure.result && <Provenance used={figure.result.used} recipe={figure.recipe ?? {}} />}
-      {recipe && figure.result && <FigureExports kind={recipe.kind} result={figure.result} spec={spec} baseName={exportName(figure.ordinal, kindLabel ?? 'figure')} />}
+      {recipe && figure.result && <FigureExports result={figure.result} spec={spec} baseName={exportName(figure.ordinal, kindLabel ?? 'figure')} />}
     </figure>
   );
 }

@@ -1,4 +1,4 @@
-import { fireEvent, screen } from '@testing-library/react';
+import { act, fireEvent, screen } from '@testing-library/react';
 import { describe, expect, it, vi } from 'vitest';
 import { RecipeForm } from './RecipeForm';
 import { INDEX_ID, SERIES_ID, seriesSummary } from './test-data';
@@ -14,6 +14,14 @@ function setup(initial: Record<string, unknown> | null = null) {
   const form = screen.getByRole('form', { name: 'Figure settings' });
   const choose = (label: string | RegExp, value: string) => fireEvent.change(screen.getByLabelText(label), { target: { value } });
   return { onSave, form, choose, ...view };
+}
+
+// react-hook-form validates through the zod resolver asynchronously: each submit is awaited
+// before its outcome is checked (the checks themselves are those of the hand-written form).
+async function submit(form: HTMLElement) {
+  await act(async () => {
+    fireEvent.submit(form);
+  });
 }
 
 describe('RecipeForm', () => {
@@ -55,55 +63,55 @@ describe('RecipeForm', () => {
     expect(screen.getByLabelText('Index leads by (months; negative: lags)')).toHaveProperty('value', '0');
   });
 
-  it('shows the library with latest version numbers and lets a version be pinned', () => {
+  it('shows the library with latest version numbers and lets a version be pinned', async () => {
     const { choose, onSave, form } = setup();
     choose('Series', SERIES_ID);
     const version = screen.getByLabelText('Version of series') as HTMLSelectElement;
     expect([...version.options].map((o) => o.text)).toEqual(['Latest (now v3)', 'Pinned to v3', 'Pinned to v2', 'Pinned to v1']);
     choose('Version of series', '2');
-    fireEvent.submit(form);
+    await submit(form);
     expect(onSave).toHaveBeenCalledTimes(1);
     expect(onSave.mock.calls[0][0].series).toEqual({ seriesId: SERIES_ID, version: 2 });
   });
 
-  it('says next to the base period that it is reversed, and does not save', () => {
+  it('says next to the base period that it is reversed, and does not save', async () => {
     const { choose, onSave, form } = setup();
     choose('Series', SERIES_ID);
     choose('From (YYYY-MM)', '2020-12');
     choose('To (YYYY-MM)', '1991-01');
-    fireEvent.submit(form);
+    await submit(form);
     expect(onSave).not.toHaveBeenCalled();
     const group = screen.getByRole('group', { name: 'Base period' });
     expect(group.textContent).toContain('the base period must not end before it starts');
     expect(screen.getByText(/One field needs attention/)).toBeTruthy();
   });
 
-  it('says which series is missing, beside its picker', () => {
+  it('says which series is missing, beside its picker', async () => {
     const { form, onSave } = setup();
-    fireEvent.submit(form);
+    await submit(form);
     expect(onSave).not.toHaveBeenCalled();
     const picker = screen.getByLabelText('Series');
     expect(picker.getAttribute('aria-invalid')).toBe('true');
     expect(document.getElementById(picker.getAttribute('aria-describedby')!)!.textContent).toBe('seriesId must be the id of a stored series');
   });
 
-  it('rejects an even smoothing width with the schema’s message', () => {
+  it('rejects an even smoothing width with the schema’s message', async () => {
     const { choose, form, onSave } = setup();
     choose('Series', SERIES_ID);
     fireEvent.change(screen.getAllByLabelText('Smoothing (odd number of months)')[0], { target: { value: '4' } });
-    fireEvent.submit(form);
+    await submit(form);
     expect(onSave).not.toHaveBeenCalled();
     expect(screen.getByText('smoothing must be an odd number of months')).toBeTruthy();
   });
 
-  it('saves the parsed recipe with the defaults filled in', () => {
+  it('saves the parsed recipe with the defaults filled in', async () => {
     const { choose, form, onSave } = setup();
     choose('What the figure shows', 'lag-correlation');
     choose('Climate index', INDEX_ID);
     choose('Carbon series', SERIES_ID);
     choose('Lags from −N to N months', '36');
     choose('Correlation', 'spearman');
-    fireEvent.submit(form);
+    await submit(form);
     expect(onSave).toHaveBeenCalledWith({
       kind: 'lag-correlation',
       index: { seriesId: INDEX_ID, version: 'latest' },

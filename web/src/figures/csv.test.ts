@@ -5,12 +5,18 @@ import { result } from './test-data';
 describe('figure data as CSV', () => {
   it('flattens a budget into one row per month with a column per term', () => {
     const csv = figureCsv(
-      'budget',
       result('budget', {
-        months: ['2000-01', '2000-02'],
-        terms: [{ name: 'advection', values: [1, null] }, { name: 'biology', values: [-0.5, 0.25] }],
-        tendency: [0.5, 0.3],
-        residual: [0, null],
+        termNames: ['advection', 'biology'],
+        months: [
+          { month: '2000-01', tendency: 0.5, sumOfTerms: 0.5, residual: 0 },
+          { month: '2000-02', tendency: 0.3, sumOfTerms: null, residual: null },
+        ],
+        terms: [
+          { month: '2000-01', term: 'advection', value: 1 },
+          { month: '2000-02', term: 'advection', value: null },
+          { month: '2000-01', term: 'biology', value: -0.5 },
+          { month: '2000-02', term: 'biology', value: 0.25 },
+        ],
         rmsResidual: 0,
         relativeResidual: 0,
         units: 'Pg C yr⁻¹',
@@ -20,9 +26,19 @@ describe('figure data as CSV', () => {
   });
 
   it('gives composite members a column each and marks timeseries months inside events', () => {
-    const composite = figureCsv('composite', result('composite', { offsets: [0], mean: [1], lower: [0], upper: [2], n: [2], members: [{ at: '1997-12', values: [1.5] }], units: 'Pg C' }));
+    const composite = figureCsv(
+      result('composite', { phase: 'warm', confidence: 0.95, events: [], offsets: [{ offset: 0, mean: 1, lower: 0, upper: 2, n: 2 }], members: [{ event: '1997-12', offset: 0, value: 1.5 }], units: 'Pg C' }),
+    );
     expect(composite.split('\r\n')[0]).toBe('offset,mean (Pg C),lower,upper,n,event peaking 1997-12');
-    const ts = figureCsv('timeseries', result('timeseries', { points: [{ month: '1997-04', value: 1 }, { month: '1997-06', value: 2 }], events: [{ phase: 'warm', start: '1997-05', peak: '1997-12', end: '1998-04' }], units: 'Pg C', show: 'anomaly' }));
+    const ts = figureCsv(
+      result('timeseries', {
+        points: [{ month: '1997-04', value: 1 }, { month: '1997-06', value: 2 }],
+        events: [{ phase: 'warm', start: '1997-05', peak: '1997-12', end: '1998-04', months: 12, peakValue: null, strength: null, label: '' }],
+        units: 'Pg C',
+        show: 'anomaly',
+        trend: { perDecade: null, perDecadeStdErr: null, r2: null, n: 0 },
+      }),
+    );
     expect(ts).toBe('month,value (Pg C),event\r\n1997-04,1,\r\n1997-06,2,warm\r\n');
   });
 

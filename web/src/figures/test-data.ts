@@ -1,4 +1,4 @@
-import type { FigureResult, SeriesSummary, UsedSeries } from '@upwell/common';
+import type { FigureKind, FigureResult, SeriesSummary, UsedSeries } from '@upwell/common';
 
 /** Builders of sample figure results for component and spec tests (not used by the app). */
 export const SERIES_ID = '6f1c2a9e-3b1d-4c55-9a0e-1f2d3c4b5a60';
@@ -8,7 +8,8 @@ export function used(over: Partial<UsedSeries> = {}): UsedSeries {
   return { seriesId: SERIES_ID, name: 'DIC 0–100 m', version: 3, units: 'Pg C', origin: 'model-output', valuesSha256: 'ab'.repeat(32), ...over };
 }
 
-export function result(kind: string, data: Record<string, unknown>, over: Partial<FigureResult> = {}): FigureResult {
+/** A result of the kind; its data is the test's to choose (the kind's result shape). */
+export function result(kind: FigureKind, data: unknown, over: Partial<Omit<FigureResult, 'kind' | 'data'>> = {}): FigureResult {
   return {
     kind,
     data,
@@ -21,7 +22,7 @@ export function result(kind: string, data: Record<string, unknown>, over: Partia
     cacheKey: 'k',
     cached: false,
     ...over,
-  };
+  } as FigureResult;
 }
 
 /** A series as the library lists it. */

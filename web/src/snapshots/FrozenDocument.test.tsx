@@ -20,9 +20,8 @@ const figure: FrozenFigure = {
   result: result(
     'event-table',
     {
-      events: [
-        { phase: 'warm', start: '1997-05', peak: '1997-12', end: '1998-05', months: 13, peakValue: 2.4, strength: 'very strong', carbon: [{ seriesId: SERIES_ID, name: 'DIC 0–100 m', PgC: -0.4213 }] },
-      ],
+      carbonSeries: [{ seriesId: SERIES_ID, name: 'DIC 0–100 m', units: 'Pg C', treatment: 'inventory-difference' }],
+      rows: [{ phase: 'warm', start: '1997-05', peak: '1997-12', end: '1998-05', months: 13, peakValue: 2.4, strength: 'very strong', label: '', carbon: { [SERIES_ID]: -0.4213 } }],
     },
     {
       methods: 'Events: 3-month running mean of the index above ±0.5 for at least 5 months; base period 1991-01 to 2020-12.',

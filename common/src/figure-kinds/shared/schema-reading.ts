@@ -4,7 +4,7 @@
  */
 import type { z } from 'zod';
 
-type Def = { type: string; innerType?: z.ZodType; in?: z.ZodType; shape?: Record<string, z.ZodType> };
+type Def = { type: string; innerType?: z.ZodType; in?: z.ZodType; shape?: Record<string, z.ZodType>; options?: z.ZodType[] };
 const defOf = (s: z.ZodType) => (s as unknown as { _zod: { def: Def } })._zod.def;
 
 /** The schema under default/prefault/optional/nullable/pipe wrappers. */
@@ -23,7 +23,10 @@ export function fieldSchema(schema: z.ZodType, path: readonly string[]): z.ZodTy
   let s: z.ZodType | undefined = schema;
   for (const key of path) {
     if (!s) return undefined;
-    s = defOf(unwrapSchema(s)).shape?.[key];
+    const d = defOf(unwrapSchema(s));
+    // A union (the event source): the first member that has the key.
+    const members = d.type === 'union' && d.options ? d.options.map((o) => defOf(unwrapSchema(o))) : [d];
+    s = members.find((m) => m.shape && key in m.shape)?.shape?.[key];
   }
   return s;
 }

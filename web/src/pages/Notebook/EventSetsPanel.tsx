@@ -1,6 +1,6 @@
 import { Box, Button, Flex, Heading, Select, Table, Text, TextField } from '@radix-ui/themes';
 import { useState } from 'react';
-import type { EventSetView } from '@upwell/common';
+import { DEFAULT_EVENT_SOURCE, type EventSetView } from '@upwell/common';
 import { useEventSets, type EditableEvent } from '../../api/event-sets';
 import { useSeriesList } from '../../api/series';
 import { ErrorNote } from '../../components/ErrorNote';
@@ -99,9 +99,10 @@ export function EventSetsPanel({ notebookId, groupId, editable }: { notebookId: 
   const sets = useEventSets(notebookId);
   const series = useSeriesList(groupId, { pageSize: 200, sort: 'name' });
   const [indexId, setIndexId] = useState('');
-  const [threshold, setThreshold] = useState('0.5');
-  const [minDuration, setMinDuration] = useState('5');
-  const [smooth, setSmooth] = useState('3');
+  // The rule's defaults as the schema states them (DEFAULT_EVENT_SOURCE is its parse of { from: 'rule' }).
+  const [threshold, setThreshold] = useState(String(DEFAULT_EVENT_SOURCE.threshold));
+  const [minDuration, setMinDuration] = useState(String(DEFAULT_EVENT_SOURCE.minDuration));
+  const [smooth, setSmooth] = useState(String(DEFAULT_EVENT_SOURCE.smooth));
   const [draft, setDraft] = useState<EditableEvent[] | null>(null);
   const [name, setName] = useState('Warm and cold events');
 
