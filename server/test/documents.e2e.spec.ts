@@ -27,6 +27,22 @@ function typeParagraph(doc: Y.Doc, text: string): Uint8Array {
   return update!;
 }
 
+/** Appends a live figure with the given attributes, returning the Yjs update it produced. */
+function addFigure(doc: Y.Doc, attrs: { id: string; caption: string; recipe: Record<string, unknown> | null }): Uint8Array {
+  let update: Uint8Array | null = null;
+  const capture = (u: Uint8Array) => (update = u);
+  doc.on('update', capture);
+  const figure = new Y.XmlElement('liveFigure');
+  figure.setAttribute('id', attrs.id);
+  figure.setAttribute('caption', attrs.caption);
+  // The editor stores the recipe as a JSON value in the attribute (common/src/editor/json-attribute.ts).
+  figure.setAttribute('recipe', attrs.recipe as unknown as string);
+  const frag = doc.getXmlFragment(DOCUMENT_FIELD);
+  frag.insert(frag.length, [figure]);
+  doc.off('update', capture);
+  return update!;
+}
+
 /** Plain text of the document's XML fragment, paragraph by paragraph. */
 function textOf(doc: Y.Doc): string[] {
   return doc.getXmlFragment(DOCUMENT_FIELD).toArray().map((n) => (n instanceof Y.XmlElement ? n.toArray().map((t) => t.toString()).join('') : ''));
@@ -101,5 +117,19 @@ describe('notebook documents as Yjs state over HTTP', () => {
     expect(copy.body.title).toBe('The 1997-type warm event (copy)');
     const text = textOf(await clientDoc(t.url, lead, copy.body.id));
     expect(text).toContain('Outgassing fell by a third during the event.');
+  });
+
+  it('checks live figures inside an HTTP edit: a recipe the engine cannot compute or an over-long caption is a 400 naming it, nothing stored', async () => {
+    const SERIES = '6f1c2a9e-3b1d-4c55-9a0e-1f2d3c4b5a60';
+    const before = textOf(await clientDoc(t.url, reader, notebookId));
+    // maxLag 61 is beyond the lag-correlation schema's bound (60).
+    const badRecipe = await send(coauthor, addFigure(await clientDoc(t.url, coauthor, notebookId), { id: 'f-bad', caption: '', recipe: { kind: 'lag-correlation', index: { seriesId: SERIES }, series: { seriesId: SERIES }, maxLag: 61 } })).expect(400);
+    expect(badRecipe.body.message).toContain('figure 1.recipe.maxLag');
+    const longCaption = await send(coauthor, addFigure(await clientDoc(t.url, coauthor, notebookId), { id: 'f-long', caption: 'x'.repeat(2001), recipe: null })).expect(400);
+    expect(longCaption.body.issues).toEqual([{ path: 'figure 1.caption', message: 'a caption holds at most 2000 characters (this one 2001)' }]);
+    expect(textOf(await clientDoc(t.url, reader, notebookId))).toEqual(before);
+    // A figure with settings still to choose, and one with a valid recipe and caption, are stored.
+    await send(coauthor, addFigure(await clientDoc(t.url, coauthor, notebookId), { id: 'f-new', caption: 'Lagged correlation.', recipe: null })).expect(200);
+    await send(coauthor, addFigure(await clientDoc(t.url, coauthor, notebookId), { id: 'f-ok', caption: 'x'.repeat(2000), recipe: { kind: 'seasonal-cycle', series: { seriesId: SERIES } } })).expect(200);
   });
 });

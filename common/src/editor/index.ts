@@ -1,3 +1,4 @@
 export * from './live-figure';
 export * from './live-number';
 export * from './extensions';
+export * from './live-nodes';

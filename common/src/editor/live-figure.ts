@@ -1,5 +1,6 @@
 import { Node, mergeAttributes } from '@tiptap/core';
 import { jsonAttribute } from './json-attribute';
+import { LIVE_FIGURE } from './live-nodes';
 
 /** Attributes of a live figure node: everything co-edits through the document. */
 export interface LiveFigureAttributes {
@@ -17,7 +18,7 @@ export interface LiveFigureAttributes {
  * and write documents with the same schema.
  */
 export const LiveFigure = Node.create({
-  name: 'liveFigure',
+  name: LIVE_FIGURE,
   group: 'block',
   atom: true,
   draggable: true,

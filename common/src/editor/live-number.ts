@@ -1,5 +1,6 @@
 import { Node, mergeAttributes } from '@tiptap/core';
 import { jsonAttribute } from './json-attribute';
+import { LIVE_NUMBER } from './live-nodes';
 
 /** Attributes of a live number: which figure's recipe, which of its numbers, how to print it. */
 export interface LiveNumberAttributes {
@@ -15,7 +16,7 @@ export interface LiveNumberAttributes {
 
 /** A number in the text computed by a recipe; it updates when the data do. */
 export const LiveNumber = Node.create({
-  name: 'liveNumber',
+  name: LIVE_NUMBER,
   group: 'inline',
   inline: true,
   atom: true,

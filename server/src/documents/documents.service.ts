@@ -1,13 +1,14 @@
 import { raw } from '@mikro-orm/core';
 import { EntityManager } from '@mikro-orm/sqlite';
 import { BadRequestException, Injectable, Logger } from '@nestjs/common';
-import type { DocumentState, DocumentUpdateResponse } from '@upwell/common';
+import type { DocumentState, DocumentUpdateResponse, PmJson } from '@upwell/common';
 import * as Y from 'yjs';
 import { Notebook } from '../notebooks/notebook.entity';
 import { NotebookPolicy } from '../notebooks/notebook.policy';
 import type { User } from '../users/user.entity';
 import { renderDocument } from './document-render';
 import { initialDocumentState } from './initial-document';
+import { newLiveNodeIssues } from './live-node-check';
 import { NotebookDocument, NotebookUpdate } from './notebook-document.entity';
 
 /** Updates waiting in the log before they are folded into the stored state. */
@@ -60,9 +61,35 @@ export class DocumentsService {
   async applyFromHttp(user: User, notebookId: string, base64: string): Promise<DocumentUpdateResponse> {
     await this.policy.authorize(user, notebookId, 'edit');
     const update = Buffer.from(base64, 'base64');
+    await this.checkLiveNodes(notebookId, update);
     if (this.liveWriter && (await this.liveWriter(notebookId, update, user.id))) return { stored: true, updatedAt: new Date().toISOString() };
     const saved = await this.append(notebookId, update, user.id);
     return { stored: true, updatedAt: saved.toISOString() };
+  }
+
+  /**
+   * Refuses an HTTP update that brings in a recipe the engine cannot compute or a caption over
+   * the limit (live-node-check.ts). Socket edits skip this (they are small and frequent; the
+   * editor writes recipes only through the schema-validated form); a figure with unreadable
+   * settings says so where it is shown.
+   */
+  private async checkLiveNodes(notebookId: string, update: Uint8Array): Promise<void> {
+    const doc = await this.load(notebookId);
+    const before = renderDocument(doc).json as unknown as PmJson;
+    let after: PmJson;
+    try {
+      Y.applyUpdate(doc, update);
+      after = renderDocument(doc).json as unknown as PmJson;
+    } catch (err) {
+      throw new BadRequestException(`the document update was refused: ${err instanceof Error ? err.message : 'it could not be read'}`);
+    }
+    const issues = newLiveNodeIssues(before, after);
+    if (issues.length) {
+      throw new BadRequestException({
+        message: `the document update was refused: ${issues.map((i) => `${i.path}: ${i.message}`).join('; ')}`,
+        issues: issues.map((i) => ({ path: i.path, message: i.message })),
+      });
+    }
   }
 
   /**

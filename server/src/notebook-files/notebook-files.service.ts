@@ -7,6 +7,7 @@ import {
   NOTEBOOK_FILE_VERSION,
   type NotebookFile,
   type NotebookView,
+  type PmJson,
 } from '@upwell/common';
 import { randomUUID } from 'node:crypto';
 import * as Y from 'yjs';
@@ -14,6 +15,7 @@ import { describeIssues, type InputIssue } from '../common/zod-validation.pipe';
 import { DocumentsService } from '../documents/documents.service';
 import { renderDocument } from '../documents/document-render';
 import { stateFromJson } from '../documents/initial-document';
+import { liveNodeIssues } from '../documents/live-node-check';
 import { NotebookDocument } from '../documents/notebook-document.entity';
 import { EventSet, type StoredEvent } from '../event-sets/event-set.entity';
 import { ZonalMeanField } from '../fields/field.entity';
@@ -205,6 +207,9 @@ export class NotebookFilesService {
       }
     });
     if (issues.length) throw refused(`the file holds recipes Upwell cannot compute: ${issues.map((i) => `${i.path}: ${i.message}`).join('; ')}`, issues);
+    // Captions are checked as an HTTP edit checks them (recipes were checked above, with file paths).
+    const captions = liveNodeIssues(document as unknown as PmJson).filter((i) => i.path.endsWith('.caption'));
+    if (captions.length) throw refused(`the file holds captions that are too long: ${captions.map((i) => `${i.path}: ${i.message}`).join('; ')}`, captions.map((i) => ({ path: `document.${i.path}`, message: i.message })));
   }
 
   /** The document as Yjs state, checked against the editor schema exactly as every edit is. */

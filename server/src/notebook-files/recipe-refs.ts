@@ -4,11 +4,10 @@
  * the names up, these functions only walk and replace.
  */
 
+import { LIVE_NUMBER, mapLiveNodeAttrs, type PmJson } from '@upwell/common';
+
 /** A document node as ProseMirror JSON. */
 export type DocJson = Record<string, unknown>;
-
-/** Node types whose `recipe` attribute binds stored data. */
-const RECIPE_NODES = new Set(['liveFigure', 'liveNumber']);
 
 type Json = unknown;
 type ObjectMapper = (obj: Record<string, unknown>) => Record<string, unknown>;
@@ -35,18 +34,12 @@ export function mapRecipes(
   rewrite: (recipe: Record<string, unknown>) => Record<string, unknown>,
   rewriteKey: (key: string) => string = (k) => k,
 ): DocJson {
-  const walk = (node: Json): Json => {
-    if (!isObject(node)) return node;
-    const out: Record<string, unknown> = { ...node };
-    const attrs = node.attrs;
-    if (RECIPE_NODES.has(String(node.type)) && isObject(attrs) && isObject(attrs.recipe)) {
-      out.attrs = { ...attrs, recipe: rewrite(attrs.recipe) };
-      if (node.type === 'liveNumber' && typeof attrs.key === 'string') (out.attrs as Record<string, unknown>).key = rewriteKey(attrs.key);
-    }
-    if (Array.isArray(node.content)) out.content = node.content.map(walk);
+  return mapLiveNodeAttrs(doc as unknown as PmJson, (type, attrs) => {
+    if (!isObject(attrs.recipe)) return attrs;
+    const out: Record<string, unknown> = { ...attrs, recipe: rewrite(attrs.recipe) };
+    if (type === LIVE_NUMBER && typeof attrs.key === 'string') out.key = rewriteKey(attrs.key);
     return out;
-  };
-  return walk(doc) as DocJson;
+  }) as unknown as DocJson;
 }
 
 /** Every recipe in the document, in document order. */

@@ -3,7 +3,7 @@ import { NodeSelection } from '@tiptap/pm/state';
 import { absolutePositionToRelativePosition, relativePositionToAbsolutePosition, ySyncPluginKey } from '@tiptap/y-tiptap';
 import { useEffect, useState } from 'react';
 import * as Y from 'yjs';
-import { COMMENT_LIMITS, type CommentAnchor } from '@upwell/common';
+import { COMMENT_LIMITS, LIVE_FIGURE, readFigureAttrs, visitEditorLiveNodes, type CommentAnchor, type PmNodeLike } from '@upwell/common';
 import { fromBase64, toBase64 } from '../sync/base64';
 
 /** What the y-sync plugin keeps: the shared fragment and its binding's node ↔ Yjs type mapping. */
@@ -32,9 +32,10 @@ export interface AnchorRange {
  */
 export function anchorFromSelection(editor: Editor): CommentAnchor | null {
   const sel = editor.state.selection;
-  if (sel instanceof NodeSelection && sel.node.type.name === 'liveFigure' && sel.node.attrs.id) {
-    const caption = String(sel.node.attrs.caption ?? '').slice(0, COMMENT_LIMITS.quoteMax).trim();
-    return { type: 'figure', figureId: String(sel.node.attrs.id), ...(caption ? { quote: caption } : {}) };
+  if (sel instanceof NodeSelection && sel.node.type.name === LIVE_FIGURE && sel.node.attrs.id) {
+    const figure = readFigureAttrs(sel.node.attrs);
+    const caption = figure.caption.slice(0, COMMENT_LIMITS.quoteMax).trim();
+    return { type: 'figure', figureId: figure.id, ...(caption ? { quote: caption } : {}) };
   }
   if (sel.empty) return null;
   const quote = editor.state.doc.textBetween(sel.from, sel.to, ' ').replace(/\s+/g, ' ').trim();
@@ -52,10 +53,10 @@ export function anchorFromSelection(editor: Editor): CommentAnchor | null {
 export function anchorToRange(editor: Editor, anchor: CommentAnchor): AnchorRange | null {
   if (anchor.type === 'figure') {
     let found: AnchorRange | null = null;
-    editor.state.doc.descendants((node, pos) => {
-      if (found) return false;
-      if (node.type.name === 'liveFigure' && node.attrs.id === anchor.figureId) found = { from: pos, to: pos + node.nodeSize };
-      return !found;
+    visitEditorLiveNodes(editor.state.doc as unknown as PmNodeLike, {
+      figure: (f, node, pos) => {
+        if (!found && f.id === anchor.figureId) found = { from: pos, to: pos + (node as unknown as { nodeSize: number }).nodeSize };
+      },
     });
     return found;
   }

@@ -1,5 +1,5 @@
 import { NodeViewWrapper, type NodeViewProps } from '@tiptap/react';
-import type { ParsedFigureRecipe } from '@upwell/common';
+import { LIVE_NUMBER, type ParsedFigureRecipe } from '@upwell/common';
 import { FigureView } from '../figures/FigureView';
 import { useFigureNumber, useNotebookEditor } from './notebook-context';
 
@@ -17,7 +17,7 @@ export function LiveFigureNodeView({ node, editor, getPos, updateAttributes, sel
       tr.setNodeMarkup(pos, undefined, { ...node.attrs, recipe });
       if (id) {
         tr.doc.descendants((n, p) => {
-          if (n.type.name === 'liveNumber' && n.attrs.figureId === id) tr.setNodeMarkup(p, undefined, { ...n.attrs, recipe });
+          if (n.type.name === LIVE_NUMBER && n.attrs.figureId === id) tr.setNodeMarkup(p, undefined, { ...n.attrs, recipe });
         });
       }
       return true;

@@ -1,11 +1,12 @@
 import type { Editor } from '@tiptap/core';
+import { LIVE_FIGURE, LIVE_NUMBER } from '@upwell/common';
 
 /** Inserts a new live figure at the cursor; its settings open under it. */
 export function insertFigure(editor: Editor): boolean {
   return editor
     .chain()
     .focus()
-    .insertContent({ type: 'liveFigure', attrs: { id: crypto.randomUUID(), recipe: null, caption: '' } })
+    .insertContent({ type: LIVE_FIGURE, attrs: { id: crypto.randomUUID(), recipe: null, caption: '' } })
     .run();
 }
 
@@ -19,7 +20,7 @@ export interface LiveNumberChoice {
 
 /** Inserts a live number at the cursor. */
 export function insertLiveNumber(editor: Editor, choice: LiveNumberChoice): boolean {
-  return editor.chain().focus().insertContent({ type: 'liveNumber', attrs: choice }).run();
+  return editor.chain().focus().insertContent({ type: LIVE_NUMBER, attrs: choice }).run();
 }
 
 /** The typed triggers: "/figure" or "/number" at the end of the text before the cursor, then Enter. */

@@ -4,7 +4,7 @@ import CollaborationCaret from '@tiptap/extension-collaboration-caret';
 import { Fragment, Slice, type Node as PMNode } from '@tiptap/pm/model';
 import { Plugin, PluginKey } from '@tiptap/pm/state';
 import { ReactNodeViewRenderer } from '@tiptap/react';
-import { DOCUMENT_FIELD, LiveFigure, LiveNumber, upwellDocumentExtensions } from '@upwell/common';
+import { DOCUMENT_FIELD, LIVE_FIGURE, LIVE_NUMBER, LiveFigure, LiveNumber, upwellDocumentExtensions } from '@upwell/common';
 import type * as Y from 'yjs';
 import { insertFigure, typedTriggerBefore } from './commands';
 import { LiveFigureNodeView } from './LiveFigureNodeView';
@@ -25,7 +25,7 @@ export const LiveFigureWithView = LiveFigure.extend({
 export function freshFigureIds(fragment: Fragment): Fragment {
   const nodes: PMNode[] = [];
   fragment.forEach((node) => {
-    if (node.type.name === 'liveFigure') nodes.push(node.type.create({ ...node.attrs, id: crypto.randomUUID() }, node.content, node.marks));
+    if (node.type.name === LIVE_FIGURE) nodes.push(node.type.create({ ...node.attrs, id: crypto.randomUUID() }, node.content, node.marks));
     else nodes.push(node.copy(freshFigureIds(node.content)));
   });
   return Fragment.fromArray(nodes);
@@ -82,7 +82,7 @@ export interface PresenceOptions {
 
 /** The editor's extensions: the shared document schema with our node views, Yjs binding, carets of others and shortcuts. */
 export function notebookEditorExtensions(doc: Y.Doc, shortcuts: UpwellShortcutOptions, presence?: PresenceOptions): AnyExtension[] {
-  const shared = upwellDocumentExtensions().map((ext) => (ext.name === 'liveFigure' ? LiveFigureWithView : ext.name === 'liveNumber' ? LiveNumberWithView : ext));
+  const shared = upwellDocumentExtensions().map((ext) => (ext.name === LIVE_FIGURE ? LiveFigureWithView : ext.name === LIVE_NUMBER ? LiveNumberWithView : ext));
   const carets = presence ? [CollaborationCaret.configure({ provider: presence.provider, user: presence.user })] : [];
   return [...shared, Collaboration.configure({ document: doc, field: DOCUMENT_FIELD }), ...carets, UpwellShortcuts.configure(shortcuts)];
 }

@@ -1,4 +1,5 @@
 import type { Node as PMNode } from '@tiptap/pm/model';
+import { visitEditorLiveNodes, type PmNodeLike } from '@upwell/common';
 
 /** A live figure where it stands in the document. */
 export interface FigureEntry {
@@ -23,13 +24,7 @@ export interface FigureIndex {
 /** Lists the live figures of a document in order. */
 export function listFigures(doc: PMNode): FigureEntry[] {
   const out: FigureEntry[] = [];
-  doc.descendants((node, pos) => {
-    if (node.type.name === 'liveFigure') {
-      out.push({ id: node.attrs.id, pos, recipe: node.attrs.recipe ?? null, caption: node.attrs.caption ?? '' });
-      return false;
-    }
-    return true;
-  });
+  visitEditorLiveNodes(doc as unknown as PmNodeLike, { figure: (f, _node, pos) => out.push({ id: f.id, pos, recipe: f.recipe, caption: f.caption }) });
   return out;
 }
 

@@ -1,7 +1,7 @@
 import { Node as PMNode, type Mark } from '@tiptap/pm/model';
 import { renderToReactElement } from '@tiptap/static-renderer/pm/react';
 import { useMemo, type ReactNode } from 'react';
-import { upwellDocumentExtensions, upwellSchema, type FrozenFigure, type FrozenNumber, type SnapshotView } from '@upwell/common';
+import { LIVE_FIGURE, LIVE_NUMBER, upwellDocumentExtensions, upwellSchema, visitEditorLiveNodes, type FrozenFigure, type FrozenNumber, type PmNodeLike, type SnapshotView } from '@upwell/common';
 import { FrozenFigureView } from '../figures/FrozenFigureView';
 import { safeHref } from './safe-href';
 
@@ -53,19 +53,17 @@ function matchFrozen(doc: PMNode, content: FrozenContent) {
   const numbersInOrder = [...content.numbers].sort((a, b) => a.ordinal - b.ordinal);
   let f = 0;
   let n = 0;
-  doc.descendants((node) => {
-    if (node.type.name === 'liveFigure') {
-      const frozen = byId.get(node.attrs.id) ?? inOrder[f];
-      if (frozen) figures.set(node, frozen);
+  visitEditorLiveNodes(doc as unknown as PmNodeLike, {
+    figure: (attrs, node) => {
+      const frozen = byId.get(attrs.id) ?? inOrder[f];
+      if (frozen) figures.set(node as unknown as PMNode, frozen);
       f += 1;
-      return false;
-    }
-    if (node.type.name === 'liveNumber') {
+    },
+    number: (_attrs, node) => {
       const frozen = numbersInOrder[n];
-      if (frozen) numbers.set(node, frozen);
+      if (frozen) numbers.set(node as unknown as PMNode, frozen);
       n += 1;
-    }
-    return true;
+    },
   });
   return { figures, numbers, ordinalOf: (figureId: string | null) => (figureId ? (byId.get(figureId)?.ordinal ?? null) : null) };
 }
@@ -101,7 +99,7 @@ function render(content: FrozenContent): { element: ReactNode; error: string | n
     extensions: upwellDocumentExtensions(),
     options: {
       nodeMapping: {
-        liveFigure: ({ node }) => {
+        [LIVE_FIGURE]: ({ node }) => {
           const frozen = figures.get(node);
           return frozen ? (
             <FrozenFigureView figure={frozen} />
@@ -111,7 +109,7 @@ function render(content: FrozenContent): { element: ReactNode; error: string | n
             </p>
           );
         },
-        liveNumber: ({ node }) => {
+        [LIVE_NUMBER]: ({ node }) => {
           const frozen = numbers.get(node);
           return <FrozenNumberText number={frozen} figureOrdinal={ordinalOf(frozen?.figureId ?? null)} />;
         },

@@ -1,5 +1,5 @@
 import { renderToHTMLString } from '@tiptap/static-renderer/pm/html-string';
-import { upwellDocumentExtensions, type SnapshotView } from '@upwell/common';
+import { LIVE_FIGURE, LIVE_NUMBER, upwellDocumentExtensions, type SnapshotView } from '@upwell/common';
 import sanitizeHtml from 'sanitize-html';
 import { escapeHtml } from './escape';
 import { inlineFontFaces } from './fonts';
@@ -44,8 +44,8 @@ async function documentHtml(snapshot: SnapshotView): Promise<string> {
     extensions: upwellDocumentExtensions(),
     options: {
       nodeMapping: {
-        liveFigure: () => figures[figureIndex++] ?? '',
-        liveNumber: () => `<span class="live-number">${escapeHtml(snapshot.numbers[numberIndex++]?.text ?? 'n/a')}</span>`,
+        [LIVE_FIGURE]: () => figures[figureIndex++] ?? '',
+        [LIVE_NUMBER]: () => `<span class="live-number">${escapeHtml(snapshot.numbers[numberIndex++]?.text ?? 'n/a')}</span>`,
       },
     },
   });
