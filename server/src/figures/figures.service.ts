@@ -18,6 +18,7 @@ import { FigureInputsService, type ResolvedEventSet } from './figure-inputs.serv
 import { presentFigureJson } from './figures.presenter';
 import type { RecipeInputs, RecipeOutput } from './loaded-inputs';
 import { RECIPES } from './recipes';
+import { computeRecipe } from './recipes/compute-recipe';
 import type { FigureRecipeHandler } from './recipes/recipe';
 
 /** The parsed body of the figure route. */
@@ -72,10 +73,8 @@ export class FiguresService {
       eventSet,
       zonalField: field && (await this.inputs.loadZonalField(field)),
     };
-    const output: RecipeOutput = runEngine(() => handler.compute(recipe as never, inputs));
-    // The edge checks what it sends: the data must be exactly the kind's result shape, which the web's chart reads.
-    const checked = FIGURE_REGISTRY.definition(recipe.kind).result.safeParse(output.data);
-    if (!checked.success) throw new Error(`the ${recipe.kind} recipe computed data its result schema refuses: ${checked.error.message}`);
+    // The data must be exactly the kind's result shape, which the web's chart reads (checked in computeRecipe).
+    const output: RecipeOutput = runEngine(() => computeRecipe(RECIPES as never, FIGURE_REGISTRY, recipe, inputs));
     const used = usedOf(inputs);
     const stored = {
       kind: recipe.kind,

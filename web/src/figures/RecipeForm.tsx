@@ -40,6 +40,8 @@ export function RecipeForm({
   const kindId = useId();
   const issues = countMessages(form.formState.errors);
   const Fields = kinds.fields(kind);
+  // Kinds that bind series (the time–latitude diagram binds a field) need the library.
+  const bindsSeries = useMemo(() => JSON.stringify(kinds.defaultRecipe(kind)).includes('"seriesId"'), [kinds, kind]);
 
   return (
     <FormKindsContext.Provider value={kinds}>
@@ -56,7 +58,7 @@ export function RecipeForm({
             </select>
           </div>
           {seriesLoading && <Text size="1" color="gray">Loading the group’s series library…</Text>}
-          {!seriesLoading && series.length === 0 && kind !== 'hovmoller' && (
+          {!seriesLoading && series.length === 0 && bindsSeries && (
             <Text size="1" color="gray" as="p">
               The group’s library has no series yet. Add one in the Series library, then come back to bind it here.
             </Text>
