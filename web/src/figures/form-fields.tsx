@@ -6,17 +6,15 @@
 import { Button, Flex, Text } from '@radix-ui/themes';
 import { useId, type ReactNode } from 'react';
 import { useController, useFieldArray, useFormContext, useWatch, type FieldError as RhfError, type FieldErrors } from 'react-hook-form';
-import { useQuery } from '@tanstack/react-query';
 import {
   arrayMax,
   BUDGET_COLOURS,
   budgetColour,
   DEFAULT_EVENT_SOURCE,
   numberBounds,
-  type FieldsList,
   type SeriesSummary,
 } from '@upwell/common';
-import { api } from '../api/client';
+import { useFields } from '../api/fields';
 import { useEventSets } from '../api/event-sets';
 import { useNotebookEditor } from '../editor/notebook-context';
 import { FieldError } from './FieldError';
@@ -238,7 +236,7 @@ function useEventSetChoices(): { value: string; label: string }[] {
 /** The group's stored zonal-mean fields, as choices for the time–latitude recipe. */
 export function useZonalFieldChoices(): { value: string; label: string }[] {
   const { groupId } = useNotebookEditor();
-  const fields = useQuery({ queryKey: ['fields', groupId], queryFn: () => api<FieldsList>(`/groups/${groupId}/fields`), enabled: !!groupId });
+  const fields = useFields(groupId);
   return (fields.data?.zonal ?? []).map((z) => ({ value: z.id, label: `${z.name} (${z.start}, ${z.months} months)` }));
 }
 
