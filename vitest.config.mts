@@ -31,6 +31,8 @@ export default defineConfig({
           setupFiles: ['web/src/test-setup.ts'],
         },
       },
+      // Repository checks: the boundary rule between engine, contracts, figure kinds, server and web.
+      { test: { name: 'repo', include: ['scripts/**/*.test.ts'], environment: 'node', testTimeout: 120_000 } },
       {
         resolve: { alias },
         test: {
