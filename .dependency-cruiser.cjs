@@ -89,7 +89,7 @@ module.exports = {
   ],
   options: {
     doNotFollow: { path: 'node_modules' },
-    exclude: { path: '(^|/)(node_modules|dist|test-artifacts)/' },
+    exclude: { path: '(^|/)(node_modules|dist|dist-bench|test-artifacts)/' },
     // Type-only imports count: a type of the server in the web is as much a wrong arrow as a value.
     tsPreCompilationDeps: true,
     // Maps `@upwell/common` to common/src/index.ts, as the web's tsconfig and the vitest alias do.

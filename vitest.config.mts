@@ -31,7 +31,7 @@ export default defineConfig({
         resolve: { alias },
         test: {
           name: 'server',
-          include: ['server/src/**/*.spec.ts', 'server/test/**/*.spec.ts'],
+          include: ['server/src/**/*.spec.ts', 'server/test/**/*.spec.ts', 'server/bench/**/*.spec.ts'],
           environment: 'node',
           testTimeout: 30_000,
           hookTimeout: 60_000,
