@@ -66,6 +66,13 @@ module.exports = {
       to: { path: '^(server|e2e)/' },
     },
     {
+      name: 'demo-generator-stands-alone',
+      comment: 'The demo generator (its own package) uses only @upwell/common; the server uses it, never the other way round.',
+      severity: 'error',
+      from: { path: '^server/demo-generator/' },
+      to: { path: OURS, pathNot: ['^server/demo-generator/', '^common/src/index\\.ts$'] },
+    },
+    {
       name: 'apps-use-the-common-entry',
       comment: 'Server, web and browser tests import `@upwell/common` (common/src/index.ts), never a file behind it.',
       severity: 'error',

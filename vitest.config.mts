@@ -2,8 +2,9 @@ import { defineConfig } from 'vitest/config';
 import { fileURLToPath } from 'node:url';
 
 const commonSrc = fileURLToPath(new URL('./common/src/index.ts', import.meta.url));
-// Tests read @upwell/common from its source, so they need no build of it.
-const alias = { '@upwell/common': commonSrc };
+const demoGeneratorSrc = fileURLToPath(new URL('./server/demo-generator/src/index.ts', import.meta.url));
+// Tests read @upwell/common and @upwell/demo-generator from their source, so they need no build of either.
+const alias = { '@upwell/common': commonSrc, '@upwell/demo-generator': demoGeneratorSrc };
 
 export default defineConfig({
   test: {
@@ -31,7 +32,7 @@ export default defineConfig({
         resolve: { alias },
         test: {
           name: 'server',
-          include: ['server/src/**/*.spec.ts', 'server/test/**/*.spec.ts', 'server/bench/**/*.spec.ts'],
+          include: ['server/src/**/*.spec.ts', 'server/test/**/*.spec.ts', 'server/bench/**/*.spec.ts', 'server/demo-generator/src/**/*.spec.ts'],
           environment: 'node',
           testTimeout: 30_000,
           hookTimeout: 60_000,
