@@ -33,6 +33,7 @@ describe('boundaries between engine, contracts, figure kinds, server and web', (
       'common/src/figure-kinds/lag/spec.ts': "import { page } from '../../../../web/src/page';\nexport const spec = page;\n",
       'server/src/secret.ts': "import { page } from '../../web/src/page';\nexport const SECRET = page;\n",
       'server/src/deep.ts': "import { mean } from '../../common/src/stats/mean';\nexport const deep = mean;\n",
+      'server/demo-generator/src/seed.ts': "import { SECRET } from '../../src/secret';\nexport const seed = SECRET;\n",
       'server/src/lost.ts': "import { gone } from './gone';\nexport const lost = gone;\n",
       'web/src/page.ts': "import type { SECRET } from '../../server/src/secret';\nexport const page: typeof SECRET | 1 = 1;\n",
     });
@@ -44,6 +45,7 @@ describe('boundaries between engine, contracts, figure kinds, server and web', (
         'common-never-imports-apps: common/src/figure-kinds/lag/spec.ts → web/src/page.ts',
         'common-never-imports-apps: common/src/stats/mean.ts → server/src/secret.ts',
         'contracts-import-only-engine: common/src/api/labels.ts → common/src/figure-kinds/lag/spec.ts',
+        'demo-generator-stands-alone: server/demo-generator/src/seed.ts → server/src/secret.ts',
         'engine-has-no-dependencies: common/src/stats/sum.ts → fs',
         'engine-imports-only-engine: common/src/stats/mean.ts → server/src/secret.ts',
         'engine-imports-only-engine: common/src/stats/sum.ts → common/src/api/labels.ts',
