@@ -19,7 +19,8 @@ function newest(dir, skip = new Set(['node_modules', 'dist'])) {
 
 const parts = [
   { name: 'common', src: ['common/src'], out: 'common/dist/index.js' },
-  { name: 'server', src: ['server/src', 'common/src'], out: 'server/dist/main.js' },
+  { name: '@upwell/demo-generator', src: ['server/demo-generator/src', 'common/src'], out: 'server/demo-generator/dist/index.js' },
+  { name: '@upwell/server', src: ['server/src', 'server/demo-generator/src', 'common/src'], out: 'server/dist/main.js' },
   { name: 'web', src: ['web/src', 'web/index.html', 'common/src'], out: 'web/dist/index.html' },
 ];
 for (const part of parts) {

@@ -51,10 +51,10 @@ export function notebookRoleAllows(role: NotebookRole | null | undefined, action
 }
 
 /** Things a person may try to do with a research group. */
-export const GROUP_ACTIONS = ['view', 'create-notebook', 'manage-members', 'rename', 'delete-series', 'upload-series'] as const;
+export const GROUP_ACTIONS = ['view', 'create-notebook', 'manage-members', 'rename', 'delete-series', 'upload-series', 'read-mail'] as const;
 export type GroupAction = (typeof GROUP_ACTIONS)[number];
 
-/** Which group role may do what: members work in the group, admins also run it. */
+/** Which group role may do what: members work in the group, admins also run it (and read the mail sent about it). */
 export const GROUP_PERMISSIONS: Record<GroupRole, readonly GroupAction[]> = {
   admin: GROUP_ACTIONS,
   member: ['view', 'create-notebook', 'upload-series'],

@@ -4,16 +4,10 @@ import { sampleCorrelation, linearRegression } from 'simple-statistics';
 import { runAnomaly, runBudget, runComposite, runEvents, runIntegrate, runLagCorrelation, runTrend } from '@upwell/common';
 import { startTestApp, type TestApp } from './test-app';
 import { buildUser, type TestUser } from './factories';
+import { mulberry32 } from '@upwell/common';
 
-/** A seeded series generator (mulberry32 [memory: Tommy Ettinger's public-domain PRNG]) so the check data are fixed. */
-function seeded(seed: number) {
-  return () => {
-    seed = (seed + 0x6d2b79f5) | 0;
-    let t = Math.imul(seed ^ (seed >>> 15), 1 | seed);
-    t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+// The check data are fixed by a seed on the engine's one PRNG (mulberry32, common/src/stats/prng.ts).
+const seeded = mulberry32;
 
 /** 40 years of a monthly index with a seasonal cycle, an oscillation and noise; and a carbon series lagging it by 3 months. */
 function demoPair() {

@@ -4,7 +4,7 @@ import { join } from 'node:path';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { ImportUploadResponse, ReduceFieldResponse, UploadPreview, ZonalMeanFieldView } from '@upwell/common';
-import { DEMO_FILES, writeDemoFiles, type DemoManifest } from '../src/demo/generator';
+import { DEMO_FILES, writeDemoFiles, type DemoManifest } from '@upwell/demo-generator';
 import { buildGroup, buildUser, type TestUser } from './factories';
 import { startTestApp, type TestApp } from './test-app';
 

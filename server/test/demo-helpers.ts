@@ -5,7 +5,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import request from 'supertest';
 import * as Y from 'yjs';
-import { writeDemoFiles } from '../src/demo/generator/write-demo-files';
+import { writeDemoFiles } from '@upwell/demo-generator';
 import { listRecipes, type DocJson } from '../src/notebook-files/recipe-refs';
 
 type Auth = { Authorization: string };

@@ -26,16 +26,10 @@ import { FigureCache } from '../src/figures/figure-cache';
 import { loadH5wasm } from '../src/series/netcdf/load-esm';
 import { buildGroup, buildNotebook, buildUser, type TestUser } from './factories';
 import { startTestApp, type TestApp } from './test-app';
+import { mulberry32 } from '@upwell/common';
 
-/** mulberry32 [memory: Tommy Ettinger's public-domain PRNG], seeded so the check data are fixed. */
-function seeded(seed: number) {
-  return () => {
-    seed = (seed + 0x6d2b79f5) | 0;
-    let t = Math.imul(seed ^ (seed >>> 15), 1 | seed);
-    t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+// The check data are fixed by a seed on the engine's one PRNG (mulberry32, common/src/stats/prng.ts).
+const seeded = mulberry32;
 
 const START = '1985-01';
 const N = 480; // 1985-01..2024-12: covers the default base period 1991–2020 entirely.

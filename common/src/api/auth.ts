@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { LIMITS } from './limits';
-import { GROUP_ROLES } from '../roles';
+import { GROUP_ACTIONS, GROUP_ROLES } from '../roles';
 
 const email = z
   .string({ error: 'e-mail is required' })
@@ -44,6 +44,8 @@ export const groupSummarySchema = z.object({
   id: z.string(),
   name: z.string(),
   role: z.enum(GROUP_ROLES),
+  /** What the person's role lets them do in the group, so the web offers actions without reading roles itself. */
+  allowed: z.array(z.enum(GROUP_ACTIONS)),
 });
 export type GroupSummary = z.infer<typeof groupSummarySchema>;
 

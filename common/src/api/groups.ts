@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { LIMITS } from './limits';
-import { GROUP_ROLES } from '../roles';
+import { GROUP_ACTIONS, GROUP_ROLES } from '../roles';
 import { userSchema } from './auth';
 
 /** Body of POST /api/groups. */
@@ -40,6 +40,8 @@ export const groupDetailSchema = z.object({
   name: z.string(),
   createdAt: z.string(),
   role: z.enum(GROUP_ROLES),
+  /** What the person's role lets them do in the group (as a notebook's `allowed`). */
+  allowed: z.array(z.enum(GROUP_ACTIONS)),
   members: z.array(groupMemberSchema),
 });
 export type GroupDetail = z.infer<typeof groupDetailSchema>;

@@ -27,8 +27,9 @@ describe('detectEvents() — NOAA CPC ONI rule', () => {
   });
 
   it('shows the roundTo effect of the CPC table (SON 2014 = 0.49, JFM 2015 = 0.47): unrounded the 2014–16 run breaks, rounded to 0.1 it does not', () => {
-    // CPC-like ONI sequence from ASO 2014 (centre month Sep) typed for this test, with the two values
-    // quoted in shared/science.md; the other values are illustrative, not the official table.
+    // CPC-like ONI sequence from ASO 2014 (centre month Sep) typed for this test. The two quoted values are from memory
+    // (one version of the CPC table, unverified; see test-fixtures/README.md): the test checks the rounding mechanism on
+    // this constructed sequence, not the official table.
     const oni = [0.37, 0.49, 0.62, 0.67, 0.55, 0.47, 0.54, 0.71, 0.93, 1.19, 1.5, 1.86, 2.16, 2.42, 2.57, 2.64, 2.48, 2.14, 1.58, 0.94, 0.39, -0.1];
     const raw = detectEvents({ index: { start: '2014-09', values: oni } }).events;
     expect(raw.map((e) => [e.start, e.end])).toEqual([['2015-03', '2016-04']]);

@@ -4,7 +4,7 @@ import { EARTH_RADIUS_6371_KM_M, EARTH_RADIUS_GRS80_MEAN_M } from './earth-radiu
 
 const range = (from: number, to: number, step: number) => Array.from({ length: Math.round((to - from) / step) + 1 }, (_, i) => from + i * step);
 
-// Check values for R = 6371 km from shared/science.md (spherical cell area A = R²·Δλ·(sin φ2 − sin φ1)).
+// Check values for R = 6371 km from common/test-fixtures/check-values.json (spherical cell area A = R²·Δλ·(sin φ2 − sin φ1)).
 describe('cellAreas()', () => {
   const areas = cellAreas(range(-90, 90, 1), range(0, 360, 1), EARTH_RADIUS_6371_KM_M);
 

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { correlationPValue, correlationT } from './correlation-p-value';
 
 describe('correlationPValue()', () => {
-  // Check values computed with SciPy, listed in shared/science.md ("Significance with autocorrelated series").
+  // Check values computed with SciPy 1.10 (scipy.stats.t.sf): common/test-fixtures/check-values.json, made by test-fixtures/scripts/check_values.py.
   it('gives p = 0.000872 for r = 0.3, N = 120 (t = 3.4162)', () => {
     expect(correlationT(0.3, 120)).toBeCloseTo(3.4162, 4);
     expect(correlationPValue(0.3, 120)).toBeCloseTo(0.000872, 6);

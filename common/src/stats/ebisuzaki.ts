@@ -1,3 +1,4 @@
+import { isPresent } from '../series/missing';
 import { realDft } from './dft';
 import { pearson } from './pearson';
 import type { Rng } from './prng';
@@ -111,7 +112,7 @@ function centred(x: ArrayLike<number>): Float64Array {
 function allPresent(x: ArrayLike<number | null>): boolean {
   for (let i = 0; i < x.length; i++) {
     const v = x[i];
-    if (v === null || !Number.isFinite(v)) return false;
+    if (!isPresent(v)) return false;
   }
   return true;
 }

@@ -3,7 +3,7 @@ import { effectiveSampleSize } from './effective-sample-size';
 
 // Bretherton, Widmann, Dymnikov, Wallace & Bladé (1999), J. Climate 12:1990–2009: nEff = n(1 − r1x·r1y)/(1 + r1x·r1y).
 describe('effectiveSampleSize() (Bretherton et al. 1999)', () => {
-  it('gives 42.1622 for N = 120, r1x = 0.8, r1y = 0.6 (science.md check value, SciPy)', () => {
+  it('gives 42.1622 for N = 120, r1x = 0.8, r1y = 0.6 (check-values.json, Bretherton 1999 eq. 31)', () => {
     expect(effectiveSampleSize(120, 0.8, 0.6)).toBeCloseTo(42.1622, 4);
   });
 

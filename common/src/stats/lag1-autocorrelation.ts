@@ -1,3 +1,4 @@
+import { isPresent } from '../series/missing';
 import { mean } from './mean';
 import { maxAbs, overflowSafeScale } from './scale';
 
@@ -21,7 +22,7 @@ export function lag1Autocorrelation(values: ArrayLike<number | null>): number | 
   let prev = NaN;
   for (let i = 0; i < values.length; i++) {
     const raw = values[i];
-    const present = raw !== null && Number.isFinite(raw);
+    const present = isPresent(raw);
     const d = present ? (raw as number) * scale - centre : NaN;
     if (present) {
       count++;

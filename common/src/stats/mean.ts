@@ -1,3 +1,4 @@
+import { isPresent } from '../series/missing';
 import { neumaierSum } from './neumaier-sum';
 import { maxAbs, overflowSafeScale } from './scale';
 
@@ -10,7 +11,7 @@ export function mean(values: ArrayLike<number | null>): number | null {
   let n = 0;
   for (let i = 0; i < values.length; i++) {
     const v = values[i];
-    if (v !== null && Number.isFinite(v)) n++;
+    if (isPresent(v)) n++;
   }
   if (n === 0) return null;
   const scale = overflowSafeScale(maxAbs(values));

@@ -1,3 +1,5 @@
+import { isPresent } from '../series/missing';
+
 /**
  * Compensated summation of the present (finite) values.
  *
@@ -11,7 +13,7 @@ export function neumaierSum(values: ArrayLike<number | null>): number {
   let c = 0;
   for (let i = 0; i < values.length; i++) {
     const v = values[i];
-    if (v === null || !Number.isFinite(v)) continue;
+    if (!isPresent(v)) continue;
     const t = sum + v;
     // The larger operand keeps its bits; the lost low part of the smaller one goes into c.
     if (Math.abs(sum) >= Math.abs(v)) c += sum - t + v;

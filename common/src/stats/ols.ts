@@ -1,3 +1,4 @@
+import { isPresent } from '../series/missing';
 import { maxAbs, overflowSafeScale } from './scale';
 
 /** Ordinary least-squares fit y = intercept + slope·x with standard errors. */
@@ -27,7 +28,7 @@ export function ols(x: ArrayLike<number | null>, y: ArrayLike<number | null>): O
   for (let i = 0; i < len; i++) {
     const a = x[i];
     const b = y[i];
-    if (a === null || b === null || !Number.isFinite(a) || !Number.isFinite(b)) continue;
+    if (!isPresent(a) || !isPresent(b)) continue;
     n++;
     mx += (a - mx) / n;
     my += (b * sy - my) / n;
@@ -40,7 +41,7 @@ export function ols(x: ArrayLike<number | null>, y: ArrayLike<number | null>): O
   for (let i = 0; i < len; i++) {
     const a = x[i];
     const b = y[i];
-    if (a === null || b === null || !Number.isFinite(a) || !Number.isFinite(b)) continue;
+    if (!isPresent(a) || !isPresent(b)) continue;
     const dx = a - mx;
     const dy = b * sy - my;
     sxx += dx * dx;
@@ -54,7 +55,7 @@ export function ols(x: ArrayLike<number | null>, y: ArrayLike<number | null>): O
   for (let i = 0; i < len; i++) {
     const a = x[i];
     const b = y[i];
-    if (a === null || b === null || !Number.isFinite(a) || !Number.isFinite(b)) continue;
+    if (!isPresent(a) || !isPresent(b)) continue;
     const e = b * sy - my - slope * (a - mx);
     sse += e * e;
   }

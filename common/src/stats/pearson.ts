@@ -1,3 +1,4 @@
+import { isPresent } from '../series/missing';
 import { maxAbs, overflowSafeScale } from './scale';
 
 /**
@@ -16,7 +17,7 @@ export function pearson(x: ArrayLike<number | null>, y: ArrayLike<number | null>
   for (let i = 0; i < len; i++) {
     const a = x[i];
     const b = y[i];
-    if (a === null || b === null || !Number.isFinite(a) || !Number.isFinite(b)) continue;
+    if (!isPresent(a) || !isPresent(b)) continue;
     n++;
     // Running means (Welford) rather than sums: exact enough and cannot overflow.
     mx += (a * sx - mx) / n;
@@ -29,7 +30,7 @@ export function pearson(x: ArrayLike<number | null>, y: ArrayLike<number | null>
   for (let i = 0; i < len; i++) {
     const a = x[i];
     const b = y[i];
-    if (a === null || b === null || !Number.isFinite(a) || !Number.isFinite(b)) continue;
+    if (!isPresent(a) || !isPresent(b)) continue;
     const da = a * sx - mx;
     const db = b * sy - my;
     sxx += da * da;

@@ -1,3 +1,5 @@
+import { isPresent } from '../series/missing';
+
 /**
  * Average ranks (1-based) of the present values; ties share the mean of the ranks they span
  * (the "fractional ranking" used by Spearman's rho). Missing values get NaN.
@@ -8,7 +10,7 @@ export function averageRanks(values: ArrayLike<number | null>): Float64Array {
   const idx: number[] = [];
   for (let i = 0; i < values.length; i++) {
     const v = values[i];
-    if (v !== null && Number.isFinite(v)) idx.push(i);
+    if (isPresent(v)) idx.push(i);
   }
   idx.sort((a, b) => (values[a] as number) - (values[b] as number));
   let k = 0;

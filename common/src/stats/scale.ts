@@ -1,3 +1,5 @@
+import { isPresent } from '../series/missing';
+
 /**
  * A power of two that brings values of magnitude up to maxAbs below 2^500, so that squares and sums
  * of squares of values near 1e300 cannot overflow. Multiplying by a power of two is exact (no rounding),
@@ -15,7 +17,7 @@ export function maxAbs(values: ArrayLike<number | null>): number {
   let m = 0;
   for (let i = 0; i < values.length; i++) {
     const v = values[i];
-    if (v !== null && Number.isFinite(v) && Math.abs(v) > m) m = Math.abs(v);
+    if (isPresent(v) && Math.abs(v) > m) m = Math.abs(v);
   }
   return m;
 }

@@ -1,3 +1,4 @@
+import { isPresent } from '../series/missing';
 import { pearson } from './pearson';
 import { averageRanks } from './rank';
 
@@ -12,7 +13,7 @@ export function spearman(x: ArrayLike<number | null>, y: ArrayLike<number | null
   for (let i = 0; i < len; i++) {
     const a = x[i];
     const b = y[i];
-    const both = a !== null && b !== null && Number.isFinite(a) && Number.isFinite(b);
+    const both = isPresent(a) && isPresent(b);
     px.push(both ? a : null);
     py.push(both ? b : null);
   }

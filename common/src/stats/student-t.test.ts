@@ -26,7 +26,7 @@ describe('studentTCdf()', () => {
 });
 
 describe('studentTTwoSidedP()', () => {
-  it('gives the science.md check values (SciPy): t = 3.4162, ν = 118 → p = 0.000872; t = 3.0551, ν = 28 → 0.00490', () => {
+  it('gives the check values of check-values.json (SciPy 1.10): t = 3.4162, ν = 118 → p = 0.000872; t = 3.0551, ν = 28 → 0.00490', () => {
     expect(studentTTwoSidedP(3.4162, 118)).toBeCloseTo(0.000872, 6);
     expect(studentTTwoSidedP(3.0551, 28)).toBeCloseTo(0.0049, 5);
   });

@@ -1,3 +1,4 @@
+import { isPresent } from '../series/missing';
 import { maxAbs, overflowSafeScale } from './scale';
 
 /** Count, mean and sum of squared deviations (M2) of the present values. */
@@ -22,7 +23,7 @@ export function welford(values: ArrayLike<number | null>): Moments {
   let m2 = 0;
   for (let i = 0; i < values.length; i++) {
     const raw = values[i];
-    if (raw === null || !Number.isFinite(raw)) continue;
+    if (!isPresent(raw)) continue;
     const v = raw * scale;
     n++;
     const delta = v - mean;

@@ -6,7 +6,7 @@ const ymd = (d: { year: number; month: number; day: number }) =>
   `${String(d.year).padStart(4, '0')}-${String(d.month).padStart(2, '0')}-${String(d.day).padStart(2, '0')}`;
 
 describe('decodeCfTime() (CF 1.11 §4.4 "Time coordinate")', () => {
-  // Worked conversions from /work/shared/science.md, checked there with cftime 1.6.2.
+  // Worked conversions from common/test-fixtures/check-values.json, computed with cftime 1.6.2 num2date (test-fixtures/scripts/check_values.py).
   it.each([
     ['standard', 59, '2000-02-29'],
     ['noleap', 59, '2000-03-01'],
@@ -14,7 +14,7 @@ describe('decodeCfTime() (CF 1.11 §4.4 "Time coordinate")', () => {
     ['standard', 365, '2000-12-31'],
     ['noleap', 365, '2001-01-01'],
     ['360_day', 365, '2001-01-06'],
-  ])('days since 2000-01-01 in %s: %d → %s (science.md, cftime 1.6.2)', (calendar, value, expected) => {
+  ])('days since 2000-01-01 in %s: %d → %s (check-values.json, cftime 1.6.2)', (calendar, value, expected) => {
     expect(ymd(decodeCfTime([value], 'days since 2000-01-01', calendar)[0])).toBe(expected);
   });
 

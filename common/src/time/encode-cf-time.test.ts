@@ -3,12 +3,12 @@ import { decodeCfTime } from './decode-cf-time';
 import { encodeCfTime } from './encode-cf-time';
 
 describe('encodeCfTime() (CF 1.11 §4.4)', () => {
-  // science.md worked conversions, checked there with cftime 1.6.2.
+  // Worked conversions from common/test-fixtures/check-values.json, computed with cftime 1.6.2 date2num (test-fixtures/scripts/check_values.py).
   it.each([
     ['standard', 18262],
     ['noleap', 18250],
     ['360_day', 18000],
-  ])('2000-01-01 in days since 1950-01-01, %s = %d (science.md)', (calendar, expected) => {
+  ])('2000-01-01 in days since 1950-01-01, %s = %d (check-values.json, cftime 1.6.2)', (calendar, expected) => {
     expect(encodeCfTime({ year: 2000, month: 1, day: 1 }, 'days since 1950-01-01', calendar)).toBe(expected);
   });
 

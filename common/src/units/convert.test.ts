@@ -27,7 +27,7 @@ describe('parseUnit()', () => {
 });
 
 describe('unitFactor() / convert() — worked examples', () => {
-  it('1 Pg C = 1e15 g / 12.011 g/mol = 8.3257e13 mol C (science.md; CIAAW conventional weight)', () => {
+  it('1 Pg C = 1e15 g / 12.011 g/mol = 8.3257e13 mol C (check-values.json; CIAAW conventional weight)', () => {
     expect(convert(1, 'Pg C', 'mol C')).toBeCloseTo(8.3257e13, -9);
     expect(convert(1, 'Pg C', 'mol C')).toBe(1e15 / 12.011);
   });

@@ -1,4 +1,4 @@
-import type { GriddedFieldView, ZonalMeanFieldView } from '@upwell/common';
+import { isPresent, type GriddedFieldView, type ZonalMeanFieldView } from '@upwell/common';
 import type { GriddedField, ZonalMeanField } from './field.entity';
 
 /** A kept gridded variable. */
@@ -36,7 +36,7 @@ export function presentZonalField(f: ZonalMeanField, withValues = false): ZonalM
     view.values = Array.from({ length: f.months }, (_, m) =>
       Array.from({ length: n }, (_, j) => {
         const v = f.values.readDoubleLE((m * n + j) * 8);
-        return Number.isNaN(v) ? null : v;
+        return isPresent(v) ? v : null;
       }),
     );
   }

@@ -4,7 +4,6 @@ import { ConfigService } from '@nestjs/config';
 import type { FieldsList, ReduceFieldBody, ReduceFieldResponse, ZonalMeanFieldView } from '@upwell/common';
 import { join } from 'node:path';
 import { APP_CONFIG, type AppConfig } from '../config/app-config';
-import { GroupMembership } from '../groups/group.entity';
 import { GroupPolicy } from '../groups/group.policy';
 import { NetcdfImportError, openNetcdf, reduceBox, zonalMeanField, type NetcdfFile } from '../series/netcdf';
 import { Series } from '../series/series.entity';
@@ -36,14 +35,14 @@ export class FieldsService {
 
   async zonal(user: User, id: string): Promise<ZonalMeanFieldView> {
     const field = await this.em.findOne(ZonalMeanField, { id }, { populate: ['group', 'values'] });
-    if (!field || !(await this.em.count(GroupMembership, { group: field.group, user }))) throw new NotFoundException('no such zonal-mean field');
+    if (!field || !(await this.groups.allows(user, field.group.id, 'view'))) throw new NotFoundException('no such zonal-mean field');
     return presentZonalField(field, true);
   }
 
   /** Reduces a kept field over a box (→ a series version) or a longitude band (→ a zonal-mean field). */
   async reduce(user: User, fieldId: string, body: ReduceFieldBody): Promise<ReduceFieldResponse> {
     const field = await this.em.findOne(GriddedField, { id: fieldId }, { populate: ['group', 'file'] });
-    if (!field || !(await this.em.count(GroupMembership, { group: field.group, user }))) throw new NotFoundException('no such gridded field');
+    if (!field || !(await this.groups.allows(user, field.group.id, 'view'))) throw new NotFoundException('no such gridded field');
     await this.groups.authorize(user, field.group.id, 'upload-series');
     const path = join(this.dataDir, field.file.storedPath);
     if (body.kind === 'zonal-mean') {

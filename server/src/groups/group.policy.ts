@@ -11,6 +11,7 @@ const ACTION_WORDS: Record<GroupAction, string> = {
   rename: 'rename this group (group admins only)',
   'delete-series': 'delete series of this group (group admins only)',
   'upload-series': 'upload series to this group',
+  'read-mail': 'read the mail sent about this group (group admins only)',
 };
 
 /**
@@ -38,5 +39,16 @@ export class GroupPolicy {
       throw new ForbiddenException(`your group role (${membership.role}) does not allow you to ${ACTION_WORDS[action]}`);
     }
     return membership;
+  }
+
+  /** Same rule without throwing: whether the person's role in the group allows the action (no membership: no). */
+  async allows(user: User, groupId: string, action: GroupAction): Promise<boolean> {
+    return groupRoleAllows((await this.em.findOne(GroupMembership, { user, group: groupId }))?.role, action);
+  }
+
+  /** The ids of every group in which the person's role allows the action (e.g. whose mail they may read). */
+  async groupsAllowing(user: User, action: GroupAction): Promise<Set<string>> {
+    const memberships = await this.em.find(GroupMembership, { user });
+    return new Set(memberships.filter((m) => groupRoleAllows(m.role, action)).map((m) => m.group.id));
   }
 }

@@ -3,6 +3,7 @@
  * no remote images, no tracking pixels, no links but the ones named here, and
  * every name a person typed is HTML-escaped.
  */
+import { escapeHtml } from '../common/escape-html';
 
 /** A mail's subject and its two bodies. */
 export interface MailContent {
@@ -11,10 +12,6 @@ export interface MailContent {
   html: string;
 }
 
-/** Escapes text for HTML element content and double-quoted attributes. */
-export function escapeHtml(s: string): string {
-  return s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;').replace(/'/g, '&#39;');
-}
 
 interface Paragraphs {
   subject: string;

@@ -1,4 +1,5 @@
 import { Global, Module } from '@nestjs/common';
+import { GroupsModule } from '../groups/groups.module';
 import { MailCatcher } from './mail-catcher';
 import { MailController } from './mail.controller';
 import { MailNotifier } from './mail-notifier';
@@ -7,5 +8,5 @@ import { MailService } from './mail.service';
 
 /** Sending mail (SMTP_URL or the local catcher), notification mail, and the local outbox. */
 @Global()
-@Module({ controllers: [MailController], providers: [MailCatcher, MailSender, MailNotifier, MailService], exports: [MailSender] })
+@Module({ imports: [GroupsModule], controllers: [MailController], providers: [MailCatcher, MailSender, MailNotifier, MailService], exports: [MailSender] })
 export class MailModule {}

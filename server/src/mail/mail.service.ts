@@ -1,7 +1,7 @@
 import { EntityManager } from '@mikro-orm/sqlite';
 import { Injectable, NotFoundException } from '@nestjs/common';
 import type { CapturedMail, MailOutbox, MailStatus } from '@upwell/common';
-import { GroupMembership } from '../groups/group.entity';
+import { GroupPolicy } from '../groups/group.policy';
 import type { User } from '../users/user.entity';
 import { MailCatcher } from './mail-catcher';
 
@@ -13,6 +13,7 @@ export class MailService {
   constructor(
     private readonly em: EntityManager,
     private readonly catcher: MailCatcher,
+    private readonly groups: GroupPolicy,
   ) {}
 
   status(): MailStatus {
@@ -36,8 +37,8 @@ export class MailService {
     return m;
   }
 
-  private async adminGroups(user: User): Promise<Set<string>> {
-    const ms = await this.em.find(GroupMembership, { user, role: 'admin' });
-    return new Set(ms.map((m) => m.group.id));
+  /** The groups whose mail the person may read (GroupPolicy: 'read-mail', admins). */
+  private adminGroups(user: User): Promise<Set<string>> {
+    return this.groups.groupsAllowing(user, 'read-mail');
   }
 }

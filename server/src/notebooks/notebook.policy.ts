@@ -51,6 +51,12 @@ export class NotebookPolicy {
     return { notebook: assignment.notebook, role: assignment.role };
   }
 
+  /** The ids of the notebooks of a group on which the person's role allows the action (e.g. which they may read). */
+  async notebooksAllowing(user: User | string, groupId: string, action: NotebookAction): Promise<Set<string>> {
+    const assignments = await this.em.find(NotebookRoleAssignment, { user, notebook: { group: groupId } });
+    return new Set(assignments.filter((a) => notebookRoleAllows(a.role, action)).map((a) => a.notebook.id));
+  }
+
   /** Same rule without throwing, for sockets and for shaping what a client is offered. */
   async allows(user: User | string, notebookId: string, action: NotebookAction): Promise<boolean> {
     const assignment = await this.roleOf(user, notebookId);

@@ -3,7 +3,8 @@ import { Injectable } from '@nestjs/common';
 import type { SeriesUsage } from '@upwell/common';
 import { renderDocument } from '../documents/document-render';
 import { DocumentsService } from '../documents/documents.service';
-import { Notebook, NotebookRoleAssignment } from '../notebooks/notebook.entity';
+import { Notebook } from '../notebooks/notebook.entity';
+import { NotebookPolicy } from '../notebooks/notebook.policy';
 import type { User } from '../users/user.entity';
 import { SeriesPolicy } from './series.policy';
 
@@ -18,12 +19,13 @@ export class SeriesUsageService {
     private readonly em: EntityManager,
     private readonly policy: SeriesPolicy,
     private readonly documents: DocumentsService,
+    private readonly notebooksPolicy: NotebookPolicy,
   ) {}
 
   async usage(user: User, seriesId: string): Promise<SeriesUsage> {
     const series = await this.policy.authorize(user, seriesId, 'view');
     const notebooks = await this.em.find(Notebook, { group: series.group });
-    const mine = new Set((await this.em.find(NotebookRoleAssignment, { user, notebook: { group: series.group } })).map((r) => r.notebook.id));
+    const mine = await this.notebooksPolicy.notebooksAllowing(user, series.group.id, 'read');
     const using: Notebook[] = [];
     for (const nb of notebooks) {
       const { json } = renderDocument(await this.documents.load(nb.id));

@@ -2,6 +2,7 @@ import { EntityManager } from '@mikro-orm/sqlite';
 import { Injectable, NotFoundException } from '@nestjs/common';
 import {
   formatMonth,
+  isPresent,
   parseMonth,
   type ListSeriesQuery,
   type SeriesDetail,
@@ -143,7 +144,7 @@ export class SeriesService {
       number: series.latestVersion,
       start: next.start,
       length: next.values.length,
-      missing: next.values.reduce<number>((n, v) => n + (v === null || Number.isNaN(v) ? 1 : 0), 0),
+      missing: next.values.reduce<number>((n, v) => n + (isPresent(v) ? 0 : 1), 0),
       values: encoded,
       valuesSha256: sha,
       file: next.file,

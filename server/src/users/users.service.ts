@@ -2,6 +2,7 @@ import { EntityManager } from '@mikro-orm/sqlite';
 import { Injectable } from '@nestjs/common';
 import type { MeResponse, UpdateMeRequest } from '@upwell/common';
 import { GroupMembership } from '../groups/group.entity';
+import { presentGroupSummary } from '../groups/group.presenter';
 import { User } from './user.entity';
 import { presentUser } from './user.presenter';
 
@@ -16,7 +17,7 @@ export class UsersService {
       ...presentUser(user),
       createdAt: user.createdAt.toISOString(),
       emailNotifications: user.emailNotifications,
-      groups: memberships.map((m) => ({ id: m.group.id, name: m.group.name, role: m.role })),
+      groups: memberships.map(presentGroupSummary),
     };
   }
 

@@ -42,6 +42,7 @@ const group: GroupDetail = {
   name: 'Carbon group',
   createdAt: '2026-01-01T00:00:00.000Z',
   role: 'member',
+  allowed: ['view', 'create-notebook', 'upload-series'],
   members: [
     { user: lead, role: 'admin', since: '2026-01-01T00:00:00.000Z' },
     { user: reviewer, role: 'member', since: '2026-01-01T00:00:00.000Z' },

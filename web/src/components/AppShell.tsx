@@ -27,7 +27,7 @@ function GroupSwitcher() {
 /** The frame around every signed-in page: wordmark, group, navigation. */
 export function AppShell() {
   const me = useMe();
-  const groupAdmin = me.data?.groups.some((g) => g.role === 'admin') ?? false;
+  const groupAdmin = me.data?.groups.some((g) => g.allowed.includes('read-mail')) ?? false;
   const mailStatus = useMailStatus(groupAdmin);
   const location = useLocation();
   if (!getToken() || me.error) {

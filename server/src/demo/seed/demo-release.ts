@@ -1,6 +1,6 @@
 import type { DataOrigin, DepthLayer, SeriesKind } from '@upwell/common';
 import { join } from 'node:path';
-import { writeDemoFiles } from '../generator/write-demo-files';
+import { writeDemoFiles } from '@upwell/demo-generator';
 
 /** One column of a demo file, described as the import mapping wants it. */
 export interface DemoColumn {

@@ -48,7 +48,7 @@ describe('openNetcdf()', () => {
     expect(Array.from(f.read('dic_inventory'))).toEqual(Array.from({ length: 24 }, (_, k) => 38000 + k));
   });
 
-  it('reads the same bounds from a record variable in classic and NetCDF-4 files (first bound 2000-01-01 = 18262 days since 1950-01-01, science.md)', async () => {
+  it('reads the same bounds from a record variable in classic and NetCDF-4 files (first bound 2000-01-01 = 18262 days since 1950-01-01, cftime 1.6.2 in common/test-fixtures/check-values.json)', async () => {
     const classic = await open('series-classic.nc');
     const nc4 = await open('series-netcdf4.nc');
     expect(Array.from(classic.read('time_bnds'))).toEqual(Array.from(nc4.read('time_bnds')));

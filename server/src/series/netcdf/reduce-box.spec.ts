@@ -120,7 +120,7 @@ describe('reduceBox() integral', () => {
     expect(band([350, 10]) / band([0, 360])).toBeCloseTo(20 / 360, 12);
   });
 
-  it('integrates over volume: dic over the globe and 0–100 m = 5000 m × 4πR², 4π(6371 km)² = 510,064,471.91 km² (science.md)', () => {
+  it('integrates over volume: dic over the globe and 0–100 m = 5000 m × 4πR², 4π(6371 km)² = 510,064,471.91 km² (common/test-fixtures/check-values.json)', () => {
     const r = reduceBox(depth, 'dic', { box: { lat: [-90, 90], lon: [0, 360] }, method: 'integral', radius: EARTH_RADIUS_6371_KM_M });
     // Σ dz·z = 10·5 + 20·20 + 30·45 + 40·80 = 5000 m²... times the sphere's area in m².
     expect(r.values[0]! / (5000 * 510_064_471.91e6)).toBeCloseTo(1, 10);

@@ -1,5 +1,5 @@
 import { canonicalJSON, FIGURE_KIND_LABELS, FIGURE_REGISTRY, figureData, formatValue, type EventTableData, type FrozenFigure } from '@upwell/common';
-import { escapeHtml } from './escape';
+import { escapeHtml } from '../../common/escape-html';
 import { figureSvg } from './figure-svg';
 
 /** How much of a values hash is shown: enough to tell versions apart at a glance. */

@@ -1,7 +1,7 @@
 import { renderToHTMLString } from '@tiptap/static-renderer/pm/html-string';
 import { LIVE_FIGURE, LIVE_NUMBER, upwellDocumentExtensions, type SnapshotView } from '@upwell/common';
 import sanitizeHtml from 'sanitize-html';
-import { escapeHtml } from './escape';
+import { escapeHtml } from '../../common/escape-html';
 import { inlineFontFaces } from './fonts';
 import { frozenFigureHtml } from './frozen-figure-html';
 import { SNAPSHOT_CSS } from './styles';

@@ -64,7 +64,7 @@ export default function GroupPage() {
       </>
     );
   }
-  const admin = detail.data?.role === 'admin';
+  const managesMembers = detail.data?.allowed.includes('manage-members') ?? false;
   return (
     <>
       <PageTitle title={group.name} subtitle={detail.data ? `${detail.data.members.length} members · created ${formatWhen(detail.data.createdAt)}` : undefined} />
@@ -79,7 +79,7 @@ export default function GroupPage() {
             <Table.ColumnHeaderCell>E-mail</Table.ColumnHeaderCell>
             <Table.ColumnHeaderCell>Group role</Table.ColumnHeaderCell>
             <Table.ColumnHeaderCell>Member since</Table.ColumnHeaderCell>
-            {admin && <Table.ColumnHeaderCell />}
+            {managesMembers && <Table.ColumnHeaderCell />}
           </Table.Row>
         </Table.Header>
         <Table.Body>
@@ -90,7 +90,7 @@ export default function GroupPage() {
               </Table.RowHeaderCell>
               <Table.Cell>{m.user.email}</Table.Cell>
               <Table.Cell>
-                {admin ? (
+                {managesMembers ? (
                   <Select.Root value={m.role} onValueChange={(v) => members.changeRole.mutate({ userId: m.user.id, role: v as GroupRole })} size="1">
                     <Select.Trigger aria-label={`Group role of ${m.user.name}`} />
                     <Select.Content>
@@ -106,7 +106,7 @@ export default function GroupPage() {
                 )}
               </Table.Cell>
               <Table.Cell>{formatWhen(m.since)}</Table.Cell>
-              {admin && (
+              {managesMembers && (
                 <Table.Cell>
                   {m.user.id !== me.data?.id && (
                     <Button size="1" variant="ghost" color="red" onClick={() => members.remove.mutate(m.user.id)} aria-label={`Remove ${m.user.name} from the group`}>
@@ -119,7 +119,7 @@ export default function GroupPage() {
           ))}
         </Table.Body>
       </Table.Root>
-      {admin && (
+      {managesMembers && (
         <Flex direction="column" gap="2" mt="5">
           <Heading as="h2" size="4">
             Add a member

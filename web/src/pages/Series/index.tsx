@@ -24,12 +24,12 @@ export default function SeriesPage() {
   const { group } = useCurrentGroup();
   const navigate = useNavigate();
   const [downloadError, setDownloadError] = useState<unknown>(null);
-  const usage = useSeriesUsage(seriesId, !!series.data && group?.role === 'admin');
+  const usage = useSeriesUsage(seriesId, !!series.data && !!group?.allowed.includes('delete-series'));
 
   if (series.error) return <ErrorNote error={series.error} action="Go back to the series library." />;
   if (!series.data) return <Spinner size="3" />;
   const s = series.data;
-  const admin = group?.id === s.groupId && group.role === 'admin';
+  const mayDelete = group?.id === s.groupId && group.allowed.includes('delete-series');
   const usedBy = usage.data
     ? [...usage.data.notebooks.map((n) => `“${n.title}”`), ...(usage.data.otherNotebooks ? [`${usage.data.otherNotebooks} notebook(s) you have no role on`] : [])]
     : [];
@@ -131,7 +131,7 @@ export default function SeriesPage() {
         </Heading>
         <MetadataForm key={s.updatedAt} series={s} />
       </section>
-      {admin && (
+      {mayDelete && (
         <ConfirmDelete
           label="Delete series"
           title={`Delete “${s.name}” and its ${s.versions.length} versions?`}

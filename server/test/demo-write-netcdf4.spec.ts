@@ -4,8 +4,8 @@ import { mkdtemp, readFile, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { openNetcdf, readMonthlyTime } from '../../series/netcdf';
-import { midMonthDays, NC_FILL_FLOAT, writeFieldNetcdf4, type FieldFileDescription } from './write-netcdf4';
+import { openNetcdf, readMonthlyTime } from '../src/series/netcdf';
+import { midMonthDays, NC_FILL_FLOAT, writeFieldNetcdf4, type FieldFileDescription } from '@upwell/demo-generator';
 
 let dir: string;
 // netCDF-C's own ncdump (Debian netcdf-bin) as a second opinion, where it is installed.

@@ -1,4 +1,4 @@
-import { loadH5wasm } from '../../series/netcdf/load-esm';
+import { loadH5wasm } from './load-h5wasm';
 import type { GriddedField } from './surface-dic-field';
 
 /** What goes into the NetCDF-4 file besides the numbers. */

@@ -1,9 +1,10 @@
+#!/usr/bin/env node
 import { resolve } from 'node:path';
 import { parseDemoCliArgs } from './cli-args';
 import { writeDemoFiles } from './write-demo-files';
 
 // Writes the demo files and prints the manifest:
-// node server/dist/demo/generator/cli.js <dir> [--release 1|2] [--seed N]
+// node server/demo-generator/dist/cli.js <dir> [--release 1|2] [--seed N]
 async function main(argv: string[]): Promise<void> {
   const { dir, release, seed } = parseDemoCliArgs(argv);
   const manifest = await writeDemoFiles(resolve(dir), { release, seed });

@@ -34,8 +34,8 @@ export interface TermResponse {
 /**
  * The demo sector's budget ("eastern equatorial sector, 5°S–5°N", 0–100 m, of the invented Lantern
  * ocean model). Magnitudes are invented but of plausible size for a tropical Pacific sector that
- * outgasses some 0.5 Pg C/yr (from memory; compare the global sink of about 2–3 Pg C/yr in
- * shared/science.md). Signs: positive adds DIC to the layer; the air–sea flux is positive into the
+ * outgasses some 0.5 Pg C/yr (from memory; compare the global ocean sink of about 2–3 Pg C/yr, also
+ * from memory). Signs: positive adds DIC to the layer; the air–sea flux is positive into the
  * ocean, so the region's outgassing is negative. In a warm event (T > 0) upwelling slows
  * (vertical supply falls), outgassing and biological uptake weaken; after it the discharged
  * thermocline (h < 0) shoals and the vertical supply rebounds.

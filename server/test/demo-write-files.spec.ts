@@ -2,13 +2,10 @@ import { mkdtemp, readFile, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { parseCsvForImport } from '../../series/csv';
+import { parseCsvForImport } from '../src/series/csv';
 import { anomaly, pearson } from '@upwell/common';
-import { describeNetcdf, openNetcdf, zonalMeanField } from '../../series/netcdf';
-import { generateDemoScenario } from './demo-scenario';
-import { BUDGET_RESIDUAL_MAX } from './carbon-budget';
-import { DEMO_FILES, type DemoManifest } from './demo-manifest';
-import { writeDemoFiles } from './write-demo-files';
+import { describeNetcdf, openNetcdf, zonalMeanField } from '../src/series/netcdf';
+import { generateDemoScenario, BUDGET_RESIDUAL_MAX, DEMO_FILES, type DemoManifest, writeDemoFiles } from '@upwell/demo-generator';
 
 let root: string;
 const written: Record<string, DemoManifest> = {};

@@ -5,7 +5,7 @@ import { generateDemoScenario, RELEASE_2_CHANGES } from './demo-scenario';
 
 const r1 = generateDemoScenario({ release: 1 });
 const r2 = generateDemoScenario({ release: 2 });
-// The engine's operational defaults as the figures use them (science.md, CPC ONI rule; WMO-No. 1203 base 1991–2020).
+// The engine's operational defaults as the figures use them (CPC ONI rule, common practice; WMO-No. 1203 base 1991–2020).
 const BASE = { from: '1991-01', to: '2020-12' };
 const anomalyOf = (values: Float64Array) => anomaly({ series: { start: r1.start, values: Array.from(values) }, base: BASE }).anomaly.values as number[];
 

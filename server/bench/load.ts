@@ -9,7 +9,7 @@
  * Sign-in is throttled per address (AUTH_ATTEMPTS_PER_MINUTE, 20 by default):
  * the bench raises it for its own server so it measures sign-in, not the throttle.
  * Figures are printed, never asserted. Build the server, then:
- *   node server/dist/bench/load.js [--seconds 6] [--connections 10] [--editors 20]
+ *   node server/dist-bench/bench/load.js [--seconds 6] [--connections 10] [--editors 20]
  */
 import { spawn, type ChildProcess } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
@@ -45,7 +45,8 @@ export interface LoadRow {
   errors: number;
 }
 
-const MAIN = resolve(__dirname, '../main.js');
+// The nest-built server (npm run build -w server), not this bench's own compile of src/.
+const MAIN = resolve(__dirname, '../../dist/main.js');
 const PASSWORD = 'correct horse battery';
 const EDIT_EVERY_MS = 100;
 

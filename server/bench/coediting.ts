@@ -6,7 +6,7 @@
  * to each other client receiving it, lost and duplicated edits (both should be
  * 0), and the server's memory at start, middle and end. Figures are printed,
  * never asserted. Build the server, then:
- *   node server/dist/bench/coediting.js [--clients 50] [--interval 200] [--duration 30]
+ *   node server/dist-bench/bench/coediting.js [--clients 50] [--interval 200] [--duration 30]
  */
 import { fork, type ChildProcess } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
@@ -17,7 +17,7 @@ import * as encoding from 'lib0/encoding';
 import { io, type Socket } from 'socket.io-client';
 import * as syncProtocol from 'y-protocols/sync';
 import * as Y from 'yjs';
-import { buildApp } from '../app.factory';
+import { buildApp } from '../src/app.factory';
 import { DOC_EVENTS, DOC_MESSAGE, DOCUMENT_FIELD, EDITOR_SCHEMA_VERSION, type DocMessage, type DocUpdateAck } from '@upwell/common';
 
 /** Options of one run (bounded so a typo cannot run for hours). */

@@ -1,19 +1,19 @@
 /**
  * NetCDF bench: writes a ~100 MB (time, lat, lon) float32 NetCDF-4 file with h5wasm (no Python
  * needed), then times reading it, a box mean and a zonal mean with the series library's reader.
- * Build the server, then run `node server/dist/bench/netcdf.js`. Figures are printed, never
+ * Build the server, then run `node server/dist-bench/bench/netcdf.js`. Figures are printed, never
  * asserted: timings depend on the machine. Targets: ≥ 100 MB/s ingest, reductions under 1 s.
  */
 import { mkdtempSync, rmSync, statSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { encodeCfTime } from '@upwell/common';
-import { createCfDecoder } from '../series/netcdf/cf-decoder';
-import { describeNetcdf } from '../series/netcdf/describe-netcdf';
-import { loadH5wasm } from '../series/netcdf/load-esm';
-import { openNetcdf } from '../series/netcdf/open-netcdf';
-import { reduceBox } from '../series/netcdf/reduce-box';
-import { zonalMeanField } from '../series/netcdf/zonal-mean-field';
+import { createCfDecoder } from '../src/series/netcdf/cf-decoder';
+import { describeNetcdf } from '../src/series/netcdf/describe-netcdf';
+import { loadH5wasm } from '../src/series/netcdf/load-esm';
+import { openNetcdf } from '../src/series/netcdf/open-netcdf';
+import { reduceBox } from '../src/series/netcdf/reduce-box';
+import { zonalMeanField } from '../src/series/netcdf/zonal-mean-field';
 
 /** Grid of the bench file; the defaults give 400 × 180 × 360 float32 = 103.7 MB. */
 export interface NetcdfBenchOptions {
@@ -172,7 +172,7 @@ function printTable(x: NetcdfBenchFigures, months: number, nlat: number, nlon: n
   for (const [k, v] of rows) console.log(`  ${k.padEnd(width)}  ${v}`);
 }
 
-// Run when executed directly (node server/dist/bench/netcdf.js), not when imported by a test.
+// Run when executed directly (node server/dist-bench/bench/netcdf.js), not when imported by a test.
 if (typeof require !== 'undefined' && require.main === module) {
   runNetcdfBench().catch((error: unknown) => {
     console.error(error);

@@ -2,16 +2,16 @@
  * Figure bench: builds a temporary app with buildApp, uploads 600-month series (and a small
  * zonal-mean field) through the real routes, then times every recipe through HTTP on loopback,
  * cold (the figure cache cleared before each call) and cached. Build the server, then run
- * `node server/dist/bench/figures.js [iterations]`. Figures are printed, never asserted: timings
+ * `node server/dist-bench/bench/figures.js [iterations]`. Figures are printed, never asserted: timings
  * depend on the machine. Targets: p95 < 50 ms cold, < 5 ms cached.
  */
 import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { formatMonth, parseMonth, type FigureRecipe } from '@upwell/common';
-import { buildApp } from '../app.factory';
-import { FigureCache } from '../figures/figure-cache';
-import { loadH5wasm } from '../series/netcdf/load-esm';
+import { buildApp } from '../src/app.factory';
+import { FigureCache } from '../src/figures/figure-cache';
+import { loadH5wasm } from '../src/series/netcdf/load-esm';
 
 /** Options of one run. */
 export interface FiguresBenchOptions {
@@ -195,7 +195,7 @@ function printTable(rows: FiguresBenchRow[], months: number, iterations: number)
   console.log('  targets: p95 < 50 ms cold, < 5 ms cached');
 }
 
-// Run when executed directly (node server/dist/bench/figures.js [iterations]), not when imported by a test.
+// Run when executed directly (node server/dist-bench/bench/figures.js [iterations]), not when imported by a test.
 if (typeof require !== 'undefined' && require.main === module) {
   runFiguresBench({ iterations: process.argv[2] ? Number(process.argv[2]) : undefined }).catch((error: unknown) => {
     console.error(error);

@@ -1,4 +1,0 @@
-/** Text made safe to place in HTML text or a double-quoted attribute. */
-export function escapeHtml(text: string): string {
-  return text.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;').replace(/'/g, '&#39;');
-}
