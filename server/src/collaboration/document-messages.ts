@@ -1,7 +1,7 @@
 import { BadRequestException, Injectable, Logger } from '@nestjs/common';
 import { DOC_EVENTS, notebookRoleAllows, type DocRefused, type DocUpdateAck } from '@upwell/common';
 import type { Socket } from 'socket.io';
-import { AwarenessRelay } from './awareness-relay';
+import { AwarenessRelay, PresenceRefusal } from './awareness-relay';
 import { asBytes, readDocFrame, syncStep2Frame, type DocFrame } from './doc-frames';
 import { DocumentBroadcast } from './document-broadcast';
 import type { DocumentRoom, RoomMember } from './document-room';
@@ -73,9 +73,9 @@ export class DocumentMessages {
     }
     if (frame.kind === 'awareness') {
       try {
-        this.awareness.relay(room, member, data, frame.update);
-      } catch {
-        throw new Refusal('the presence update could not be read');
+        this.awareness.relay(room, member, frame.update);
+      } catch (err) {
+        throw new Refusal(err instanceof PresenceRefusal ? err.message : 'the presence update could not be read');
       }
       return Promise.resolve({ stored: false });
     }

@@ -24,6 +24,11 @@ export function authenticatedUserId(socket: Socket): Promise<string | null> {
   return (socket.data.identity as Promise<string | null> | undefined) ?? Promise.resolve(null);
 }
 
+/** The signed-in person behind a socket as the server knows them (set once the handshake token was checked), or null. */
+export function signedInPerson(socket: Socket): { id: string; name: string } | null {
+  return (socket.data.person as { id: string; name: string } | undefined) ?? null;
+}
+
 /**
  * The app's socket: authenticates each connection by the JWT in its handshake
  * (`auth: { token }`), then puts it in its person's room and their groups' rooms.
@@ -66,6 +71,7 @@ export class RealtimeGateway implements OnGatewayInit, OnGatewayConnection {
       return null;
     }
     socket.data.userId = user.id;
+    socket.data.person = { id: user.id, name: user.name };
     const memberships = await em.find(GroupMembership, { user });
     await socket.join([userRoom(user.id), ...memberships.map((m) => groupRoom(m.group.id))]);
     this.logger.debug?.(`connected ${user.id}`);
