@@ -1,6 +1,7 @@
 import { BadRequestException, Injectable, Logger } from '@nestjs/common';
 import { DOC_EVENTS, notebookRoleAllows, type DocRefused, type DocUpdateAck } from '@upwell/common';
 import type { Socket } from 'socket.io';
+import { sessionEndReason } from '../realtime/socket-session-guard';
 import { AwarenessRelay, PresenceRefusal } from './awareness-relay';
 import { asBytes, readDocFrame, syncStep2Frame, type DocFrame } from './doc-frames';
 import { DocumentBroadcast } from './document-broadcast';
@@ -44,6 +45,9 @@ export class DocumentMessages {
     try {
       const data = asBytes((body as { data?: unknown } | null)?.data);
       if (!notebookId || !data) throw new Refusal('doc:message needs { notebookId: string, data: binary }');
+      // Checked in the socket's turn: a message queued before sign-out everywhere (or expiry) but handled after is not kept.
+      const ended = sessionEndReason(socket);
+      if (ended) throw new Refusal(ended);
       const joined = this.membership.memberOf(socket, notebookId);
       if (!joined) throw new Refusal('join this notebook (doc:join) before sending to it');
       let frame: DocFrame;

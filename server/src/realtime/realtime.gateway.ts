@@ -8,7 +8,9 @@ import { AuthService } from '../auth/auth.service';
 import { isAllowedOrigin } from '../common/same-origin';
 import { APP_CONFIG, type AppConfig } from '../config/app-config';
 import { GroupMembership } from '../groups/group.entity';
+import { User } from '../users/user.entity';
 import { ProcessFanout } from './process-fanout';
+import { SocketSessionGuard, tokenExpiry } from './socket-session-guard';
 import { groupRoom, RealtimeEvents, userRoom } from './realtime-events';
 
 /** Options of the app's one socket.io server; every gateway on it passes the same ones. */
@@ -43,6 +45,7 @@ export class RealtimeGateway implements OnGatewayInit, OnGatewayConnection {
     private readonly events: RealtimeEvents,
     private readonly config: ConfigService,
     private readonly fanout: ProcessFanout,
+    private readonly guard: SocketSessionGuard,
   ) {}
 
   afterInit(server: Server): void {
@@ -52,10 +55,12 @@ export class RealtimeGateway implements OnGatewayInit, OnGatewayConnection {
     server.engine.opts.allowRequest = (req, done) =>
       isAllowedOrigin(req.headers.origin, req.headers.host, appOrigin) ? done(null, true) : done('this origin may not open the socket', false);
     this.fanout.attach(server);
+    this.guard.attach(server);
   }
 
   async handleConnection(socket: Socket): Promise<void> {
     // Set synchronously, before any message of this socket can be handled.
+    this.guard.install(socket);
     socket.data.identity = this.authenticate(socket);
     await socket.data.identity;
   }
@@ -72,8 +77,15 @@ export class RealtimeGateway implements OnGatewayInit, OnGatewayConnection {
     }
     socket.data.userId = user.id;
     socket.data.person = { id: user.id, name: user.name };
+    this.guard.watchExpiry(socket, tokenExpiry(token!));
     const memberships = await em.find(GroupMembership, { user });
     await socket.join([userRoom(user.id), ...memberships.map((m) => groupRoom(m.group.id))]);
+    // A sign-out everywhere committed while this handshake read the user would have missed this socket: look once more.
+    const now = await this.em.fork().findOne(User, { id: user.id });
+    if (now?.tokenVersion !== user.tokenVersion) {
+      this.guard.endSession(socket, SOCKET_CLOSE_REASONS.signedOut);
+      return null;
+    }
     this.logger.debug?.(`connected ${user.id}`);
     return user.id;
   }

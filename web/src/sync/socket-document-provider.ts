@@ -8,10 +8,12 @@ import {
   DOC_EVENTS,
   DOC_MESSAGE,
   EDITOR_SCHEMA_VERSION,
+  SOCKET_EVENTS,
   type DocJoinAck,
   type DocMessage,
   type DocRefused,
   type DocUpdateAck,
+  type SocketNotice,
 } from '@upwell/common';
 import { fromBase64, toBase64 } from './base64';
 
@@ -55,6 +57,7 @@ export class SocketDocumentProvider {
     socket.on(DOC_EVENTS.message, this.onMessage);
     socket.on(DOC_EVENTS.refused, this.onRefused);
     socket.on(DOC_EVENTS.accessRevoked, this.onRevoked);
+    socket.on(SOCKET_EVENTS.sessionEnded, this.onSessionEnded);
     socket.on('connect', this.join);
     socket.on('disconnect', this.onDisconnect);
     if (socket.connected) this.join();
@@ -74,6 +77,7 @@ export class SocketDocumentProvider {
     this.socket.off(DOC_EVENTS.message, this.onMessage);
     this.socket.off(DOC_EVENTS.refused, this.onRefused);
     this.socket.off(DOC_EVENTS.accessRevoked, this.onRevoked);
+    this.socket.off(SOCKET_EVENTS.sessionEnded, this.onSessionEnded);
     this.socket.off('connect', this.join);
     this.socket.off('disconnect', this.onDisconnect);
     this.awareness.destroy();
@@ -108,7 +112,14 @@ export class SocketDocumentProvider {
 
   private onDisconnect = (): void => {
     this.joined = false;
-    this.set('offline');
+    // The server closed the socket because the sign-in ended: that stays the message, not "offline".
+    if (this.status !== 'closed') this.set('offline');
+  };
+
+  /** The server is about to close the socket: signed out everywhere, or the sign-in expired. Unsent edits stay in localStorage. */
+  private onSessionEnded = (notice: SocketNotice): void => {
+    this.joined = false;
+    this.set('closed', notice.message);
   };
 
   private onMessage = (msg: DocMessage): void => {
