@@ -36,11 +36,17 @@ export interface DocMessage {
   data: Uint8Array;
 }
 
-/** Ack of a client's `doc:message`: whether what it carried is now stored. */
-export type DocUpdateAck = { stored: boolean; error?: string };
+/**
+ * Ack of a client's `doc:message`: whether what it carried is now stored,
+ * applied and visible to everyone in the room. `resync: true` means the
+ * update built on changes the server never received: the server has sent its
+ * sync step 1, and the client's step 2 answer carries what was missing.
+ */
+export type DocUpdateAck = { stored: boolean; error?: string; resync?: boolean };
 
-/** Payload of `doc:refused`. */
+/** Payload of `doc:refused`; `resync` as in DocUpdateAck. */
 export interface DocRefused {
   notebookId: string;
   reason: string;
+  resync?: boolean;
 }

@@ -3,14 +3,22 @@ import { DOC_EVENTS, notebookRoleAllows, type DocRefused, type DocUpdateAck } fr
 import type { Socket } from 'socket.io';
 import { sessionEndReason } from '../realtime/socket-session-guard';
 import { AwarenessRelay, PresenceRefusal } from './awareness-relay';
-import { asBytes, readDocFrame, syncStep2Frame, type DocFrame } from './doc-frames';
+import { MissingDependencies } from '../documents/documents.service';
+import { asBytes, readDocFrame, syncStep1Frame, syncStep2Frame, type DocFrame } from './doc-frames';
 import { DocumentBroadcast } from './document-broadcast';
 import type { DocumentRoom, RoomMember } from './document-room';
 import { DocumentWriter } from './document-writer';
 import { RoomMembership } from './room-membership';
 
-/** Why a message was refused, said to the person. */
-class Refusal extends Error {}
+/** Why a message was refused, said to the person; `resync` when the client should run sync step 1/2 and send again. */
+class Refusal extends Error {
+  constructor(
+    message: string,
+    readonly resync = false,
+  ) {
+    super(message);
+  }
+}
 
 /**
  * `doc:message` from a client: sync step 1 is answered, document updates are
@@ -39,8 +47,9 @@ export class DocumentMessages {
     const notebookId = typeof (body as { notebookId?: unknown } | null)?.notebookId === 'string' ? (body as { notebookId: string }).notebookId : '';
     const refuse = (err: unknown): DocUpdateAck => {
       const reason = err instanceof Refusal ? err.message : this.unexpected(err, notebookId);
-      socket.emit(DOC_EVENTS.refused, { notebookId, reason } satisfies DocRefused);
-      return { stored: false, error: reason };
+      const resync = err instanceof Refusal && err.resync;
+      socket.emit(DOC_EVENTS.refused, { notebookId, reason, ...(resync ? { resync } : {}) } satisfies DocRefused);
+      return resync ? { stored: false, error: reason, resync } : { stored: false, error: reason };
     };
     try {
       const data = asBytes((body as { data?: unknown } | null)?.data);
@@ -91,6 +100,12 @@ export class DocumentMessages {
     return this.writer.write(room, frame.update, member.userId, member.socket).then(
       (): DocUpdateAck => ({ stored: true }),
       (err) => {
+        if (err instanceof MissingDependencies) {
+          // Ask for what we lack: the client answers this step 1 with a step 2 holding the missing changes. Not after
+          // a step 2 itself, which already held everything the client had: asking again would go round in circles.
+          if (frame.step === 'update') this.broadcast.toSocket(member.socket, room.notebookId, syncStep1Frame(room.doc));
+          throw new Refusal(err.message, frame.step === 'update');
+        }
         throw err instanceof BadRequestException ? new Refusal(err.message) : err;
       },
     );

@@ -163,7 +163,8 @@ export class SocketDocumentProvider {
         this.pending = this.pending.slice(upTo);
         this.persistPending();
         if (!this.pending.length && this.status === 'saving') this.set('saved', null);
-      } else this.set('refused', ack.error ?? 'the server did not store the change');
+      } else if (!ack.resync) this.set('refused', ack.error ?? 'the server did not store the change');
+      // resync: the server asked for what it lacks (sync step 1); our step 2 answer carries these edits again.
     });
   }
 
@@ -177,7 +178,7 @@ export class SocketDocumentProvider {
   };
 
   private onRefused = (r: DocRefused): void => {
-    if (r.notebookId === this.notebookId) this.set('refused', r.reason);
+    if (r.notebookId === this.notebookId && !r.resync) this.set('refused', r.reason);
   };
 
   private onRevoked = (r: { notebookId: string }): void => {
