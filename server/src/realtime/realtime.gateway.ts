@@ -1,3 +1,4 @@
+import { RequestContext } from '@mikro-orm/core';
 import { EntityManager } from '@mikro-orm/sqlite';
 import { Logger } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
@@ -7,7 +8,7 @@ import type { Server, Socket } from 'socket.io';
 import { AuthService } from '../auth/auth.service';
 import { isAllowedOrigin } from '../common/same-origin';
 import { APP_CONFIG, type AppConfig } from '../config/app-config';
-import { GroupMembership } from '../groups/group.entity';
+import { GroupPolicy } from '../groups/group.policy';
 import { User } from '../users/user.entity';
 import { ProcessFanout } from './process-fanout';
 import { SocketSessionGuard, tokenExpiry } from './socket-session-guard';
@@ -46,6 +47,7 @@ export class RealtimeGateway implements OnGatewayInit, OnGatewayConnection {
     private readonly config: ConfigService,
     private readonly fanout: ProcessFanout,
     private readonly guard: SocketSessionGuard,
+    private readonly groups: GroupPolicy,
   ) {}
 
   afterInit(server: Server): void {
@@ -78,8 +80,9 @@ export class RealtimeGateway implements OnGatewayInit, OnGatewayConnection {
     socket.data.userId = user.id;
     socket.data.person = { id: user.id, name: user.name };
     this.guard.watchExpiry(socket, tokenExpiry(token!));
-    const memberships = await em.find(GroupMembership, { user });
-    await socket.join([userRoom(user.id), ...memberships.map((m) => groupRoom(m.group.id))]);
+    // Which group rooms: the group policy decides, as for HTTP (a socket has no request context: give it one).
+    const groupIds = await RequestContext.create(em, () => this.groups.viewableGroupIds(user.id));
+    await socket.join([userRoom(user.id), ...groupIds.map(groupRoom)]);
     // A sign-out everywhere committed while this handshake read the user would have missed this socket: look once more.
     const now = await this.em.fork().findOne(User, { id: user.id });
     if (now?.tokenVersion !== user.tokenVersion) {
