@@ -61,7 +61,16 @@ describe('access taken away while a document is open', () => {
     expect(textsOf(await storedDoc(t.url, lead.accessToken, id))).not.toContain('a reader now');
     // Upgraded again, the same open socket may edit.
     await request(t.url).put(`/api/notebooks/${id}/roles/${coauthor.user.id}`).set(lead.auth).send({ role: 'co-author' }).expect(200);
-    expect(await c.addParagraph('an author again')).toEqual({ stored: true });
+    // The new edit builds on the refused one, which the server never took: it is refused with a resync request rather
+    // than acked and kept invisible (issue 23 item 9); the client's answer to the server's step 1 then stores both.
+    expect(await c.addParagraph('an author again')).toMatchObject({ stored: false, resync: true });
+    let stored: string[] = [];
+    for (let i = 0; i < 50 && !stored.includes('an author again'); i++) {
+      await new Promise((r) => setTimeout(r, 50));
+      stored = textsOf(await storedDoc(t.url, lead.accessToken, id));
+    }
+    expect(stored).toContain('an author again');
+    expect(await c.addParagraph('and once more')).toEqual({ stored: true });
   });
 
   it('closes every notebook of a group for someone who leaves it, and a deleted notebook for everyone', async () => {

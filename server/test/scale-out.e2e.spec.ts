@@ -3,7 +3,7 @@ import { existsSync, mkdtempSync, rmSync } from 'node:fs';
 import { connect } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { SOCKET_EVENTS, type SeriesVersionCreatedEvent, type UploadPreview } from '@upwell/common';
+import { SOCKET_CLOSE_REASONS, SOCKET_EVENTS, type SeriesVersionCreatedEvent, type UploadPreview } from '@upwell/common';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { freePort, MAIN, runServerToExit, startServer, type ChildServer } from './child-server';
@@ -150,6 +150,18 @@ describe.skipIf(!REDIS_SERVER)(REDIS_SERVER ? TITLE : `${TITLE} (skipped: redis-
     await request(a.url).delete(`/api/notebooks/${notebookId}/roles/${coauthor.user.id}`).set(lead.auth).expect(204);
     await eventually(() => onB.revoked.length === 1, 5000, 'doc:access-revoked on B');
     expect(await onB.addParagraph('after losing the role')).toMatchObject({ stored: false });
+  });
+
+  it('closes a socket on B when its person signs out everywhere through A, saying why (issue 23 item 3)', async () => {
+    const leaver = await buildUser(a.url, 'Signs out on A');
+    const group = await buildGroup(a.url, leaver);
+    const own = (await buildNotebook(a.url, group.id, leaver, [], 'Left open on B')).id;
+    const onB = await client(b, leaver);
+    await onB.join(own);
+    const ended = collect<{ message: string }>(onB.socket, SOCKET_EVENTS.sessionEnded);
+    await request(a.url).post('/api/auth/logout').set(leaver.auth).expect(204);
+    await eventually(() => !onB.socket.connected, 5000, 'the socket on B to be closed');
+    expect(ended).toEqual([{ message: SOCKET_CLOSE_REASONS.signedOut }]);
   });
 
   it('refuses to start when Redis cannot be reached, naming the address without its password', async () => {

@@ -1,3 +1,5 @@
+import { z } from 'zod';
+
 /**
  * How a notebook's Yjs document travels over the app's socket. Messages are
  * framed as in the y-protocols reference provider: a varUint message type
@@ -20,12 +22,29 @@ export const DOC_EVENTS = {
 /** Message types inside `doc:message` (the reference provider's numbering). */
 export const DOC_MESSAGE = { sync: 0, awareness: 1 } as const;
 
-/** Body of `doc:join`. */
-export interface DocJoinRequest {
-  notebookId: string;
-  /** The client's EDITOR_SCHEMA_VERSION; older clients are refused so nobody writes nodes others cannot read. */
-  schemaVersion: number;
-}
+/** A notebook id as a socket payload carries it (not checked as a uuid: an unknown id gets the same answer as a missing notebook). */
+const notebookId = z.string().min(1).max(100);
+
+/** Bytes as socket.io delivers them: a Buffer in Node, an ArrayBuffer or a typed array from browsers. */
+const binary = z.custom<ArrayBuffer | ArrayBufferView>((v) => v instanceof ArrayBuffer || ArrayBuffer.isView(v), 'expected binary data');
+
+/** Body of `doc:join`. `schemaVersion`: the client's EDITOR_SCHEMA_VERSION; older clients are refused so nobody writes nodes others cannot read. */
+export const docJoinRequestSchema = z.object({ notebookId, schemaVersion: z.number() });
+export type DocJoinRequest = z.infer<typeof docJoinRequestSchema>;
+
+/** Body of `doc:leave`. */
+export const docLeaveRequestSchema = z.object({ notebookId });
+export type DocLeaveRequest = z.infer<typeof docLeaveRequestSchema>;
+
+/** Body of a client's `doc:message`: one framed y-protocols message. */
+export const docMessageRequestSchema = z.object({ notebookId, data: binary });
+
+/** The shape each client → server document event needs, as refusals say it. */
+export const DOC_PAYLOAD_SHAPES = {
+  join: 'doc:join needs { notebookId: string, schemaVersion: number }',
+  leave: 'doc:leave needs { notebookId: string }',
+  message: 'doc:message needs { notebookId: string, data: binary }',
+} as const;
 
 /** Ack of `doc:join`. */
 export type DocJoinAck = { ok: true; role: string; canEdit: boolean } | { ok: false; error: string };
@@ -36,11 +55,17 @@ export interface DocMessage {
   data: Uint8Array;
 }
 
-/** Ack of a client's `doc:message`: whether what it carried is now stored. */
-export type DocUpdateAck = { stored: boolean; error?: string };
+/**
+ * Ack of a client's `doc:message`: whether what it carried is now stored,
+ * applied and visible to everyone in the room. `resync: true` means the
+ * update built on changes the server never received: the server has sent its
+ * sync step 1, and the client's step 2 answer carries what was missing.
+ */
+export type DocUpdateAck = { stored: boolean; error?: string; resync?: boolean };
 
-/** Payload of `doc:refused`. */
+/** Payload of `doc:refused`; `resync` as in DocUpdateAck. */
 export interface DocRefused {
   notebookId: string;
   reason: string;
+  resync?: boolean;
 }

@@ -25,6 +25,8 @@ export const SOCKET_EVENTS = {
   notificationCreated: 'notifications:created',
   /** Server → client: the connection was refused or a message was not accepted. */
   error: 'upwell:error',
+  /** Server → client, just before it closes the socket: the sign-in ended (signed out everywhere, or expired). */
+  sessionEnded: 'upwell:session-ended',
 } as const;
 
 /** Payload of `series:version-created`. */
@@ -64,7 +66,23 @@ export interface NotificationCreatedEvent {
   unread: number;
 }
 
+/**
+ * How many socket messages one person may send (all their connections on a
+ * server process together): a token bucket of `burst` refilled at `perSecond`.
+ * Typing sends one update and one caret move per keystroke, so this leaves a
+ * fast typist with several tabs far inside it.
+ */
+export const SOCKET_MESSAGE_LIMIT = { burst: 400, perSecond: 100 } as const;
+
 /** Why the server refused or closed a socket. */
 export const SOCKET_CLOSE_REASONS = {
   unauthenticated: 'sign in first: the socket needs a valid token',
+  rateLimited: `too many socket messages: at most ${SOCKET_MESSAGE_LIMIT.perSecond} a second (bursts of ${SOCKET_MESSAGE_LIMIT.burst}) per person; this one was not handled, slow down`,
+  signedOut: 'you signed out everywhere; sign in again to keep working',
+  expired: 'your sign-in has expired; sign in again to keep working',
 } as const;
+
+/** Payload of `upwell:error` and `upwell:session-ended`. */
+export interface SocketNotice {
+  message: string;
+}

@@ -1,2 +1,3 @@
 export * from './events';
 export * from './document-protocol';
+export * from './presence';

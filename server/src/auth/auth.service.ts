@@ -1,5 +1,6 @@
 import { EntityManager } from '@mikro-orm/sqlite';
 import { ConflictException, Injectable, UnauthorizedException } from '@nestjs/common';
+import { EventEmitter2 } from '@nestjs/event-emitter';
 import { JwtService } from '@nestjs/jwt';
 import type { AuthResponse, LoginRequest, RegisterRequest } from '@upwell/common';
 import { User } from '../users/user.entity';
@@ -7,12 +8,21 @@ import { presentUser } from '../users/user.presenter';
 import { hashPassword, verifyPassword } from './password';
 import type { TokenPayload } from './token-payload';
 
+/** Events of sign-in sessions, for listeners elsewhere (the socket closes a signed-out person's connections). */
+export const AUTH_EVENTS = { signedOutEverywhere: 'auth.signed-out-everywhere' } as const;
+
+/** Payload of `auth.signed-out-everywhere`. */
+export interface SignedOutEverywhere {
+  userId: string;
+}
+
 /** Sign-up, sign-in, sign-out and token checks. */
 @Injectable()
 export class AuthService {
   constructor(
     private readonly em: EntityManager,
     private readonly jwt: JwtService,
+    private readonly events: EventEmitter2,
   ) {}
 
   async register(body: RegisterRequest): Promise<AuthResponse> {
@@ -37,6 +47,7 @@ export class AuthService {
   async logout(user: User): Promise<void> {
     user.tokenVersion += 1;
     await this.em.flush();
+    this.events.emit(AUTH_EVENTS.signedOutEverywhere, { userId: user.id } satisfies SignedOutEverywhere);
   }
 
   /** The user a verified token speaks for, or null if the token was revoked. */

@@ -1,15 +1,26 @@
 import { BadRequestException, Injectable, Logger } from '@nestjs/common';
-import { DOC_EVENTS, notebookRoleAllows, type DocRefused, type DocUpdateAck } from '@upwell/common';
+import { DOC_EVENTS, DOC_PAYLOAD_SHAPES, docMessageRequestSchema, type DocRefused, type DocUpdateAck } from '@upwell/common';
 import type { Socket } from 'socket.io';
-import { AwarenessRelay } from './awareness-relay';
-import { asBytes, readDocFrame, syncStep2Frame, type DocFrame } from './doc-frames';
+import { sessionEndReason } from '../realtime/socket-session-guard';
+import { AwarenessRelay, PresenceRefusal } from './awareness-relay';
+import { MissingDependencies } from '../documents/documents.service';
+import { NotebookPolicy } from '../notebooks/notebook.policy';
+import { asBytes, readDocFrame, syncStep1Frame, syncStep2Frame, type DocFrame } from './doc-frames';
 import { DocumentBroadcast } from './document-broadcast';
 import type { DocumentRoom, RoomMember } from './document-room';
 import { DocumentWriter } from './document-writer';
 import { RoomMembership } from './room-membership';
+import { readSocketPayload } from './socket-payload';
 
-/** Why a message was refused, said to the person. */
-class Refusal extends Error {}
+/** Why a message was refused, said to the person; `resync` when the client should run sync step 1/2 and send again. */
+class Refusal extends Error {
+  constructor(
+    message: string,
+    readonly resync = false,
+  ) {
+    super(message);
+  }
+}
 
 /**
  * `doc:message` from a client: sync step 1 is answered, document updates are
@@ -26,6 +37,7 @@ export class DocumentMessages {
     private readonly writer: DocumentWriter,
     private readonly awareness: AwarenessRelay,
     private readonly broadcast: DocumentBroadcast,
+    private readonly policy: NotebookPolicy,
   ) {}
 
   /**
@@ -35,15 +47,21 @@ export class DocumentMessages {
    * the ack once it is stored (or refused); it never rejects.
    */
   async handle(socket: Socket, body: unknown): Promise<{ outcome: Promise<DocUpdateAck> }> {
-    const notebookId = typeof (body as { notebookId?: unknown } | null)?.notebookId === 'string' ? (body as { notebookId: string }).notebookId : '';
+    const request = readSocketPayload(docMessageRequestSchema, body, DOC_PAYLOAD_SHAPES.message);
+    const notebookId = request.ok ? request.value.notebookId : '';
     const refuse = (err: unknown): DocUpdateAck => {
       const reason = err instanceof Refusal ? err.message : this.unexpected(err, notebookId);
-      socket.emit(DOC_EVENTS.refused, { notebookId, reason } satisfies DocRefused);
-      return { stored: false, error: reason };
+      const resync = err instanceof Refusal && err.resync;
+      socket.emit(DOC_EVENTS.refused, { notebookId, reason, ...(resync ? { resync } : {}) } satisfies DocRefused);
+      return resync ? { stored: false, error: reason, resync } : { stored: false, error: reason };
     };
     try {
-      const data = asBytes((body as { data?: unknown } | null)?.data);
-      if (!notebookId || !data) throw new Refusal('doc:message needs { notebookId: string, data: binary }');
+      if (!request.ok) throw new Refusal(request.error);
+      const data = asBytes(request.value.data);
+      if (!data) throw new Refusal(DOC_PAYLOAD_SHAPES.message);
+      // Checked in the socket's turn: a message queued before sign-out everywhere (or expiry) but handled after is not kept.
+      const ended = sessionEndReason(socket);
+      if (ended) throw new Refusal(ended);
       const joined = this.membership.memberOf(socket, notebookId);
       if (!joined) throw new Refusal('join this notebook (doc:join) before sending to it');
       let frame: DocFrame;
@@ -73,20 +91,26 @@ export class DocumentMessages {
     }
     if (frame.kind === 'awareness') {
       try {
-        this.awareness.relay(room, member, data, frame.update);
-      } catch {
-        throw new Refusal('the presence update could not be read');
+        this.awareness.relay(room, member, frame.update);
+      } catch (err) {
+        throw new Refusal(err instanceof PresenceRefusal ? err.message : 'the presence update could not be read');
       }
       return Promise.resolve({ stored: false });
     }
     // Already stored (typically a client's sync step 2 right after joining): nothing to refuse or write.
     if (!this.writer.carriesNews(room, frame.update)) return Promise.resolve({ stored: true });
-    if (!notebookRoleAllows(member.role, 'edit')) {
-      throw new Refusal(`as ${member.role.replace('-', ' ')} you may read this notebook but not edit it; the change was not applied`);
-    }
+    // The role cached on the member (refreshed on every role change), judged by the notebook policy like an HTTP edit.
+    const refused = this.policy.refusal(member.role, 'edit');
+    if (refused) throw new Refusal(`${refused}; the change was not applied`);
     return this.writer.write(room, frame.update, member.userId, member.socket).then(
       (): DocUpdateAck => ({ stored: true }),
       (err) => {
+        if (err instanceof MissingDependencies) {
+          // Ask for what we lack: the client answers this step 1 with a step 2 holding the missing changes. Not after
+          // a step 2 itself, which already held everything the client had: asking again would go round in circles.
+          if (frame.step === 'update') this.broadcast.toSocket(member.socket, room.notebookId, syncStep1Frame(room.doc));
+          throw new Refusal(err.message, frame.step === 'update');
+        }
         throw err instanceof BadRequestException ? new Refusal(err.message) : err;
       },
     );

@@ -1,12 +1,21 @@
 import { Injectable } from '@nestjs/common';
-import { EDITOR_SCHEMA_VERSION, SOCKET_CLOSE_REASONS, notebookRoleAllows, type DocJoinAck } from '@upwell/common';
+import {
+  DOC_PAYLOAD_SHAPES,
+  EDITOR_SCHEMA_VERSION,
+  SOCKET_CLOSE_REASONS,
+  docJoinRequestSchema,
+  docLeaveRequestSchema,
+  type DocJoinAck,
+} from '@upwell/common';
 import type { Socket } from 'socket.io';
 import { AwarenessRelay } from './awareness-relay';
 import { syncStep1Frame, syncStep2Frame } from './doc-frames';
 import { DocumentAccess } from './document-access';
 import { DocumentBroadcast } from './document-broadcast';
 import { DocumentRooms } from './document-rooms';
+import { NotebookPolicy } from '../notebooks/notebook.policy';
 import { RoomMembership } from './room-membership';
+import { readSocketPayload } from './socket-payload';
 
 const NOT_FOUND = 'no such notebook, or you have no role on it';
 
@@ -19,6 +28,7 @@ export class DocumentSessions {
     private readonly membership: RoomMembership,
     private readonly broadcast: DocumentBroadcast,
     private readonly awareness: AwarenessRelay,
+    private readonly policy: NotebookPolicy,
   ) {}
 
   /**
@@ -29,11 +39,9 @@ export class DocumentSessions {
   async join(socket: Socket, body: unknown): Promise<DocJoinAck> {
     const userId = await this.access.userOf(socket);
     if (!userId) return { ok: false, error: SOCKET_CLOSE_REASONS.unauthenticated };
-    const request = body as { notebookId?: unknown; schemaVersion?: unknown } | null;
-    if (typeof request?.notebookId !== 'string' || typeof request.schemaVersion !== 'number') {
-      return { ok: false, error: 'doc:join needs { notebookId: string, schemaVersion: number }' };
-    }
-    const { notebookId, schemaVersion } = request;
+    const request = readSocketPayload(docJoinRequestSchema, body, DOC_PAYLOAD_SHAPES.join);
+    if (!request.ok) return request;
+    const { notebookId, schemaVersion } = request.value;
     // A newer editor than this server's could write nodes the server's schema and older editors cannot read.
     if (!Number.isInteger(schemaVersion) || schemaVersion > EDITOR_SCHEMA_VERSION) {
       return { ok: false, error: `this server runs editor schema version ${EDITOR_SCHEMA_VERSION}; version ${schemaVersion} is not one it knows` };
@@ -63,7 +71,7 @@ export class DocumentSessions {
       }
       room.members.get(socket.id)!.role = role;
     }
-    return { ok: true, role, canEdit: notebookRoleAllows(role, 'edit') };
+    return { ok: true, role, canEdit: this.policy.roleAllows(role, 'edit') };
   }
 
   /**
@@ -83,9 +91,9 @@ export class DocumentSessions {
 
   /** `doc:leave`: stops following the notebook. */
   async leave(socket: Socket, body: unknown): Promise<void> {
-    const notebookId = (body as { notebookId?: unknown } | null)?.notebookId;
-    if (typeof notebookId !== 'string') return;
-    const joined = this.membership.memberOf(socket, notebookId);
+    const request = readSocketPayload(docLeaveRequestSchema, body, DOC_PAYLOAD_SHAPES.leave);
+    if (!request.ok) return; // doc:leave has no ack: there is nobody to tell
+    const joined = this.membership.memberOf(socket, request.value.notebookId);
     if (joined) await this.membership.leave(joined.room, socket);
   }
 

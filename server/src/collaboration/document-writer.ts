@@ -84,8 +84,17 @@ export class DocumentWriter {
         if (!(err instanceof BadRequestException)) return batch.map(() => err);
       }
     }
+    // One by one, each checked against the room's document plus the ones before it that were stored (a client's
+    // second update builds on its first), not the room's document alone.
+    const running = new Y.Doc({ gc: true });
+    Y.applyUpdate(running, Y.encodeStateAsUpdate(room.doc));
     const outcome: (true | unknown)[] = [];
-    for (const w of batch) outcome.push(await append(w.update, w.authorId).then(() => true, (err: unknown) => err));
+    for (const w of batch) {
+      const stored = await this.documents.append(room.notebookId, w.update, w.authorId, this.em.fork(), running).then(() => true, (err: unknown) => err);
+      if (stored === true) Y.applyUpdate(running, w.update);
+      outcome.push(stored);
+    }
+    running.destroy();
     return outcome;
   }
 }

@@ -100,12 +100,16 @@ export class DocumentsService {
   async append(notebookId: string, update: Uint8Array, authorId: string | null, em: EntityManager = this.em, current?: Y.Doc): Promise<Date> {
     // `current`: the open room's document, which holds exactly what is stored; copying it spares reading the state and log.
     const doc = current ? copyOf(current) : await this.load(notebookId, em);
+    const pendingBefore = pendingOf(doc);
     try {
       Y.applyUpdate(doc, update);
       renderDocument(doc);
     } catch (err) {
       throw new BadRequestException(`the document update was refused: ${err instanceof Error ? err.message : 'it could not be read'}`);
     }
+    // Yjs keeps an update whose dependencies it lacks as pending, invisible; storing and acking it would be a lie.
+    const pendingAfter = pendingOf(doc);
+    if (pendingAfter !== null && pendingAfter !== pendingBefore) throw new MissingDependencies();
     const now = new Date();
     em.create(NotebookUpdate, { notebook: notebookId, update: Buffer.from(update), author: authorId });
     await em.nativeUpdate(NotebookDocument, { notebook: notebookId }, { updatedAt: now });
@@ -149,6 +153,24 @@ export class DocumentsService {
       await tx.nativeDelete(NotebookUpdate, { notebook: notebookId, id: { $lte: stored.compactedThrough } });
     });
   }
+}
+
+/**
+ * Refusal of an update that builds on changes the server never received
+ * (Yjs would keep it pending: stored, acknowledged, never visible). The
+ * sender should resync (y-protocols sync step 1/2), which sends what is missing.
+ */
+export class MissingDependencies extends BadRequestException {
+  constructor() {
+    super('the document update builds on changes the server never received, so it was not applied; resync (sync step 1/2) to send them');
+  }
+}
+
+/** What Yjs holds back as pending in a document (structs and deletions waiting for missing dependencies), or null. */
+function pendingOf(doc: Y.Doc): string | null {
+  const { pendingStructs, pendingDs } = doc.store;
+  if (!pendingStructs && !pendingDs) return null;
+  return `${pendingStructs ? Buffer.from(pendingStructs.update).toString('base64') : ''}|${pendingDs ? Buffer.from(pendingDs).toString('base64') : ''}`;
 }
 
 /** An independent copy of a document, so checking an update against it leaves the original untouched. */

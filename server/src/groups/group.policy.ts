@@ -27,6 +27,12 @@ export class GroupPolicy {
     return this.em.findOne(GroupMembership, { user, group: groupId }, { populate: ['group'] });
   }
 
+  /** The groups whose events the person may hear over the socket: each group where their role allows `view`. */
+  async viewableGroupIds(user: User | string): Promise<string[]> {
+    const memberships = await this.em.find(GroupMembership, { user });
+    return memberships.filter((m) => groupRoleAllows(m.role, 'view')).map((m) => m.group.id);
+  }
+
   /**
    * The membership, if it allows the action. Someone outside the group gets
    * 404 (the group's existence is not theirs to learn); a member without the

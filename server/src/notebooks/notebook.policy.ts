@@ -43,11 +43,8 @@ export class NotebookPolicy {
   async authorize(user: User, notebookId: string, action: NotebookAction): Promise<NotebookAccess> {
     const assignment = await this.roleOf(user, notebookId);
     if (!assignment) throw new NotFoundException('no such notebook, or you have no role on it');
-    if (!notebookRoleAllows(assignment.role, action)) {
-      throw new ForbiddenException(
-        `as ${NOTEBOOK_ROLE_LABELS[assignment.role].toLowerCase()} you may not ${ACTION_WORDS[action]}`,
-      );
-    }
+    const refused = this.refusal(assignment.role, action);
+    if (refused) throw new ForbiddenException(refused);
     return { notebook: assignment.notebook, role: assignment.role };
   }
 
@@ -55,6 +52,16 @@ export class NotebookPolicy {
   async notebooksAllowing(user: User | string, groupId: string, action: NotebookAction): Promise<Set<string>> {
     const assignments = await this.em.find(NotebookRoleAssignment, { user, notebook: { group: groupId } });
     return new Set(assignments.filter((a) => notebookRoleAllows(a.role, action)).map((a) => a.notebook.id));
+  }
+
+  /** Whether a role already looked up (the socket caches it per connection) allows the action. */
+  roleAllows(role: NotebookRole, action: NotebookAction): boolean {
+    return notebookRoleAllows(role, action);
+  }
+
+  /** Why a role already looked up may not do the action (the sentence HTTP answers with 403), or null if it may. */
+  refusal(role: NotebookRole, action: NotebookAction): string | null {
+    return notebookRoleAllows(role, action) ? null : `as ${NOTEBOOK_ROLE_LABELS[role].toLowerCase()} you may not ${ACTION_WORDS[action]}`;
   }
 
   /** Same rule without throwing, for sockets and for shaping what a client is offered. */

@@ -9,6 +9,8 @@ export const PROCESS_EVENTS = {
   docFrame: 'upwell:doc-frame',
   /** Roles changed: each process re-checks the document sockets it holds. */
   accessChanged: 'upwell:access-changed',
+  /** A person signed out everywhere: each process closes that person's sockets. */
+  signedOut: 'upwell:signed-out',
 } as const;
 
 type Handler = (payload: unknown) => void;

@@ -1,3 +1,4 @@
+import { RequestContext } from '@mikro-orm/core';
 import { EntityManager } from '@mikro-orm/sqlite';
 import { Logger } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
@@ -7,8 +8,10 @@ import type { Server, Socket } from 'socket.io';
 import { AuthService } from '../auth/auth.service';
 import { isAllowedOrigin } from '../common/same-origin';
 import { APP_CONFIG, type AppConfig } from '../config/app-config';
-import { GroupMembership } from '../groups/group.entity';
+import { GroupPolicy } from '../groups/group.policy';
+import { User } from '../users/user.entity';
 import { ProcessFanout } from './process-fanout';
+import { SocketSessionGuard, tokenExpiry } from './socket-session-guard';
 import { groupRoom, RealtimeEvents, userRoom } from './realtime-events';
 
 /** Options of the app's one socket.io server; every gateway on it passes the same ones. */
@@ -22,6 +25,11 @@ export const SOCKET_OPTIONS = { cors: { origin: false }, maxHttpBufferSize: 5e6 
  */
 export function authenticatedUserId(socket: Socket): Promise<string | null> {
   return (socket.data.identity as Promise<string | null> | undefined) ?? Promise.resolve(null);
+}
+
+/** The signed-in person behind a socket as the server knows them (set once the handshake token was checked), or null. */
+export function signedInPerson(socket: Socket): { id: string; name: string } | null {
+  return (socket.data.person as { id: string; name: string } | undefined) ?? null;
 }
 
 /**
@@ -38,6 +46,8 @@ export class RealtimeGateway implements OnGatewayInit, OnGatewayConnection {
     private readonly events: RealtimeEvents,
     private readonly config: ConfigService,
     private readonly fanout: ProcessFanout,
+    private readonly guard: SocketSessionGuard,
+    private readonly groups: GroupPolicy,
   ) {}
 
   afterInit(server: Server): void {
@@ -47,10 +57,12 @@ export class RealtimeGateway implements OnGatewayInit, OnGatewayConnection {
     server.engine.opts.allowRequest = (req, done) =>
       isAllowedOrigin(req.headers.origin, req.headers.host, appOrigin) ? done(null, true) : done('this origin may not open the socket', false);
     this.fanout.attach(server);
+    this.guard.attach(server);
   }
 
   async handleConnection(socket: Socket): Promise<void> {
     // Set synchronously, before any message of this socket can be handled.
+    this.guard.install(socket);
     socket.data.identity = this.authenticate(socket);
     await socket.data.identity;
   }
@@ -66,8 +78,17 @@ export class RealtimeGateway implements OnGatewayInit, OnGatewayConnection {
       return null;
     }
     socket.data.userId = user.id;
-    const memberships = await em.find(GroupMembership, { user });
-    await socket.join([userRoom(user.id), ...memberships.map((m) => groupRoom(m.group.id))]);
+    socket.data.person = { id: user.id, name: user.name };
+    this.guard.watchExpiry(socket, tokenExpiry(token!));
+    // Which group rooms: the group policy decides, as for HTTP (a socket has no request context: give it one).
+    const groupIds = await RequestContext.create(em, () => this.groups.viewableGroupIds(user.id));
+    await socket.join([userRoom(user.id), ...groupIds.map(groupRoom)]);
+    // A sign-out everywhere committed while this handshake read the user would have missed this socket: look once more.
+    const now = await this.em.fork().findOne(User, { id: user.id });
+    if (now?.tokenVersion !== user.tokenVersion) {
+      this.guard.endSession(socket, SOCKET_CLOSE_REASONS.signedOut);
+      return null;
+    }
     this.logger.debug?.(`connected ${user.id}`);
     return user.id;
   }

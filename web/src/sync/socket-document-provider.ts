@@ -8,10 +8,12 @@ import {
   DOC_EVENTS,
   DOC_MESSAGE,
   EDITOR_SCHEMA_VERSION,
+  SOCKET_EVENTS,
   type DocJoinAck,
   type DocMessage,
   type DocRefused,
   type DocUpdateAck,
+  type SocketNotice,
 } from '@upwell/common';
 import { fromBase64, toBase64 } from './base64';
 
@@ -55,6 +57,7 @@ export class SocketDocumentProvider {
     socket.on(DOC_EVENTS.message, this.onMessage);
     socket.on(DOC_EVENTS.refused, this.onRefused);
     socket.on(DOC_EVENTS.accessRevoked, this.onRevoked);
+    socket.on(SOCKET_EVENTS.sessionEnded, this.onSessionEnded);
     socket.on('connect', this.join);
     socket.on('disconnect', this.onDisconnect);
     if (socket.connected) this.join();
@@ -74,6 +77,7 @@ export class SocketDocumentProvider {
     this.socket.off(DOC_EVENTS.message, this.onMessage);
     this.socket.off(DOC_EVENTS.refused, this.onRefused);
     this.socket.off(DOC_EVENTS.accessRevoked, this.onRevoked);
+    this.socket.off(SOCKET_EVENTS.sessionEnded, this.onSessionEnded);
     this.socket.off('connect', this.join);
     this.socket.off('disconnect', this.onDisconnect);
     this.awareness.destroy();
@@ -108,7 +112,14 @@ export class SocketDocumentProvider {
 
   private onDisconnect = (): void => {
     this.joined = false;
-    this.set('offline');
+    // The server closed the socket because the sign-in ended: that stays the message, not "offline".
+    if (this.status !== 'closed') this.set('offline');
+  };
+
+  /** The server is about to close the socket: signed out everywhere, or the sign-in expired. Unsent edits stay in localStorage. */
+  private onSessionEnded = (notice: SocketNotice): void => {
+    this.joined = false;
+    this.set('closed', notice.message);
   };
 
   private onMessage = (msg: DocMessage): void => {
@@ -152,7 +163,8 @@ export class SocketDocumentProvider {
         this.pending = this.pending.slice(upTo);
         this.persistPending();
         if (!this.pending.length && this.status === 'saving') this.set('saved', null);
-      } else this.set('refused', ack.error ?? 'the server did not store the change');
+      } else if (!ack.resync) this.set('refused', ack.error ?? 'the server did not store the change');
+      // resync: the server asked for what it lacks (sync step 1); our step 2 answer carries these edits again.
     });
   }
 
@@ -166,7 +178,7 @@ export class SocketDocumentProvider {
   };
 
   private onRefused = (r: DocRefused): void => {
-    if (r.notebookId === this.notebookId) this.set('refused', r.reason);
+    if (r.notebookId === this.notebookId && !r.resync) this.set('refused', r.reason);
   };
 
   private onRevoked = (r: { notebookId: string }): void => {

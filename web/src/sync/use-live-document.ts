@@ -1,15 +1,11 @@
 import { useEffect, useMemo, useState, useSyncExternalStore } from 'react';
 import * as Y from 'yjs';
 import { appSocket } from '../realtime/socket';
+import { presenceColour } from '@upwell/common';
 import { SocketDocumentProvider, type LiveStatus } from './socket-document-provider';
 
-/** A colour per person for carets and the presence row, stable for a given id (colour-blind-distinct set). */
-const PRESENCE_COLOURS = ['#0072b2', '#d55e00', '#009e73', '#cc79a7', '#e69f00', '#56b4e9', '#7a5195', '#2f4b7c'];
-export function presenceColour(userId: string): string {
-  let h = 0;
-  for (let i = 0; i < userId.length; i++) h = (h * 31 + userId.charCodeAt(i)) | 0;
-  return PRESENCE_COLOURS[Math.abs(h) % PRESENCE_COLOURS.length];
-}
+/** The caret colour of a person; the server writes the same one into everyone's presence (see common/src/collab/presence.ts). */
+export { presenceColour };
 
 /** Opens a notebook's live document over the socket: the Y.Doc, its provider (awareness) and status. */
 export function useLiveNotebookDocument(notebookId: string, me: { id: string; name: string }) {
@@ -19,6 +15,7 @@ export function useLiveNotebookDocument(notebookId: string, me: { id: string; na
     const socket = appSocket();
     if (!socket) return;
     const p = new SocketDocumentProvider(socket, notebookId, doc);
+    // Shown to this tab only: the server replaces `user` in what others receive with its own record of the signed-in person.
     p.awareness.setLocalStateField('user', { id: me.id, name: me.name, color: presenceColour(me.id) });
     setProvider(p);
     return () => {

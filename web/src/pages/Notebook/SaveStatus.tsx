@@ -14,9 +14,9 @@ const WORDS: Record<Status, string> = {
 /** Where the document stands with the server, in words. */
 export function SaveStatusLine({ status, error }: { status: Status; error: string | null }) {
   return (
-    <Text size="2" color={status === 'refused' ? 'red' : status === 'offline' ? 'amber' : 'gray'} role="status" aria-live="polite">
+    <Text size="2" color={status === 'refused' || status === 'closed' ? 'red' : status === 'offline' ? 'amber' : 'gray'} role="status" aria-live="polite">
       {WORDS[status]}
-      {status === 'refused' && error ? `: ${error}` : ''}
+      {(status === 'refused' || status === 'closed') && error ? `: ${error}` : ''}
     </Text>
   );
 }
