@@ -1,4 +1,4 @@
-import { describeNetcdf, importSeries, openNetcdf, reduceBox, zonalMeanField, type FieldCandidate, type NetcdfFile, type NetcdfLimits } from '../series/netcdf';
+import { describeNetcdf, importSeries, NetcdfImportError, openNetcdf, reduceBox, zonalMeanField, type FieldCandidate, type NetcdfFile, type NetcdfLimits } from '../series/netcdf';
 import { presentNetcdfPreview } from '../uploads/netcdf-preview.presenter';
 import type { JobInput, JobKind, JobOutput, JobProgress } from './job-kinds';
 
@@ -26,7 +26,12 @@ function extentOf(file: NetcdfFile, variable: string | undefined): [number, numb
 /** The handler of every job kind. */
 export const JOB_HANDLERS: { [K in JobKind]: JobHandler<K> } = {
   'netcdf-preview': ({ path, limits }) => withFile(path, limits, (f) => presentNetcdfPreview(describeNetcdf(f))),
-  'netcdf-series': ({ path, limits, variables }) => withFile(path, limits, (f) => variables.map((name) => importSeries(f, name))),
+  'netcdf-series': ({ path, limits, variables }) =>
+    withFile(path, limits, (f) => {
+      const missing = variables.find((name) => !f.variables.some((v) => v.name === name));
+      if (missing !== undefined) throw new NetcdfImportError('no-such-variable', missing, `the file has no variable “${missing}”`);
+      return variables.map((name) => importSeries(f, name));
+    }),
   'netcdf-fields': ({ path, limits }) =>
     withFile(path, limits, (f) => {
       const d = describeNetcdf(f);
