@@ -173,25 +173,26 @@ function readSlab(fd: number, v: NcVariable, layout: Layout, slab: Hyperslab): N
   const outer = runsAlongLast ? rank - 2 : rank - 1;
   const first = byteOf(slab.start);
   const spanEnd = byteOf(slab.start.map((st, i) => st + slab.count[i] - 1)) + layout.size;
-  const whole = spanEnd - first <= Math.min(MAX_SPAN_BYTES, Math.max(4 * total * layout.size, 1024 ** 2));
-  const span = whole ? readRange(fd, first, spanEnd - first) : null;
-  const run = whole ? null : new Uint8Array(runBytes);
+  // One read for the whole span when it is not much more than the slab and every value in it sits
+  // a whole number of elements from the first (a record stride of 12 bytes would misalign doubles).
+  const aligned = !layout.record || layout.stride % layout.size === 0;
+  const whole = aligned && spanEnd - first <= Math.min(MAX_SPAN_BYTES, Math.max(4 * total * layout.size, 1024 ** 2));
+  // Bytes come in big-endian (spec); Buffer's native swap turns them into host order, so a typed
+  // array view reads them without a per-value DataView call (about ten times faster on big planes).
+  const span = whole ? hostOrder(readRange(fd, first, spanEnd - first), v.dtype) : null;
+  const run = whole ? null : Buffer.alloc(runBytes);
   const index = slab.start.slice();
   let k = 0;
   for (;;) {
     const byte = byteOf(index);
-    let view: DataView;
-    let at: number;
     if (span) {
-      view = new DataView(span.buffer, span.byteOffset, span.byteLength);
-      at = byte - first;
+      const at = (byte - first) / layout.size;
+      out.set(span.subarray(at, at + lastCount), k);
     } else {
       readInto(fd, run!, byte);
-      view = new DataView(run!.buffer);
-      at = 0;
+      out.set(hostOrder(run!, v.dtype), k);
     }
-    const read = reader(view, v.dtype);
-    for (let j = 0; j < lastCount; j++) out[k++] = read(at + j * layout.size);
+    k += lastCount;
     // Advance the odometer over the dimensions outside the contiguous run.
     let d = outer;
     while (d >= 0) {
@@ -205,9 +206,29 @@ function readSlab(fd: number, v: NcVariable, layout: Layout, slab: Hyperslab): N
   return out;
 }
 
+/** Big-endian bytes (swapped in place) as a typed array of the variable's type. */
+function hostOrder(bytes: Buffer, dtype: NcDtype): NumericArray {
+  const { buffer, byteOffset, byteLength } = bytes;
+  switch (dtype) {
+    case 'int8':
+      return new Int8Array(buffer, byteOffset, byteLength);
+    case 'char':
+      return new Uint8Array(buffer, byteOffset, byteLength);
+    case 'int16':
+      return new Int16Array(bytes.swap16().buffer, byteOffset, byteLength / 2);
+    case 'int32':
+      return new Int32Array(bytes.swap32().buffer, byteOffset, byteLength / 4);
+    case 'float32':
+      return new Float32Array(bytes.swap32().buffer, byteOffset, byteLength / 4);
+    default:
+      return new Float64Array(bytes.swap64().buffer, byteOffset, byteLength / 8);
+  }
+}
+
 /** Bytes [position, position + length) of the file. */
-function readRange(fd: number, position: number, length: number): Uint8Array {
-  const bytes = new Uint8Array(length);
+function readRange(fd: number, position: number, length: number): Buffer {
+  // allocUnsafeSlow: its own ArrayBuffer at offset 0, so typed views over it are aligned.
+  const bytes = Buffer.allocUnsafeSlow(length);
   readInto(fd, bytes, position);
   return bytes;
 }
@@ -218,23 +239,6 @@ function readInto(fd: number, into: Uint8Array, position: number): void {
     const n = readSync(fd, into, done, into.length - done, position + done);
     if (n === 0) throw new NetcdfImportError('truncated', `byte ${position + done}`, `the file ends at byte ${position + done}, inside data its header declares`);
     done += n;
-  }
-}
-
-function reader(view: DataView, dtype: NcDtype): (byte: number) => number {
-  switch (dtype) {
-    case 'int8':
-      return (b) => view.getInt8(b);
-    case 'char':
-      return (b) => view.getUint8(b);
-    case 'int16':
-      return (b) => view.getInt16(b, false);
-    case 'int32':
-      return (b) => view.getInt32(b, false);
-    case 'float32':
-      return (b) => view.getFloat32(b, false);
-    default:
-      return (b) => view.getFloat64(b, false);
   }
 }
 
