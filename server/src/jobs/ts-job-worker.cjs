@@ -6,20 +6,35 @@
 // `@upwell/common` resolves to the engine and CF-time sources, all that jobs use of it.
 const { workerData } = require('node:worker_threads');
 const Module = require('node:module');
-const { readFileSync } = require('node:fs');
+const { createHash } = require('node:crypto');
+const { mkdirSync, readFileSync, renameSync, writeFileSync } = require('node:fs');
+const { tmpdir } = require('node:os');
 const { join } = require('node:path');
-const ts = require('typescript');
 
-const compilerOptions = {
-  module: ts.ModuleKind.Node16,
-  target: ts.ScriptTarget.ES2022,
-  esModuleInterop: true,
-  experimentalDecorators: true,
-  inlineSourceMap: true,
-};
+// Compiled output is kept by content hash, so later workers (and test runs) skip loading TypeScript.
+const cacheDir = join(tmpdir(), 'upwell-job-worker-ts-cache');
+mkdirSync(cacheDir, { recursive: true });
+let ts = null;
+
+function compile(source, filename) {
+  ts ??= require('typescript');
+  const compilerOptions = { module: ts.ModuleKind.Node16, target: ts.ScriptTarget.ES2022, esModuleInterop: true, experimentalDecorators: true, inlineSourceMap: true };
+  return ts.transpileModule(source, { compilerOptions, fileName: filename.replace(/\.ts$/, '.cts') }).outputText;
+}
+
 require.extensions['.ts'] = (module, filename) => {
-  const { outputText } = ts.transpileModule(readFileSync(filename, 'utf8'), { compilerOptions, fileName: filename.replace(/\.ts$/, '.cts') });
-  module._compile(outputText, filename);
+  const source = readFileSync(filename, 'utf8');
+  const cached = join(cacheDir, `${createHash('sha256').update(filename).update('\0').update(source).digest('hex')}.js`);
+  let output;
+  try {
+    output = readFileSync(cached, 'utf8');
+  } catch {
+    output = compile(source, filename);
+    const draft = `${cached}.${process.pid}.${Math.random().toString(36).slice(2)}`;
+    writeFileSync(draft, output);
+    renameSync(draft, cached);
+  }
+  module._compile(output, filename);
 };
 
 const commonKey = join(workerData.commonSrc, '__job-worker-common__.ts');
