@@ -14,6 +14,7 @@ import {
   type CsvImportOptions,
   type ImportUploadBody,
   type ImportUploadResponse,
+  type StagedUploadsList,
   type UploadPreview,
 } from '@upwell/common';
 import { createReadStream } from 'node:fs';
@@ -34,6 +35,7 @@ import { UploadedFile } from './uploaded-file.entity';
 import { formatDepthLayer } from './depth-layer';
 import { GriddedField } from '../fields/field.entity';
 import { JobRunner } from '../jobs/job-runner';
+import { UploadQuotas } from './upload-quotas';
 import { netcdfFailureAs4xx } from '../jobs/netcdf-failure';
 
 /** A file as Multer and the hashing storage hand it over. */
@@ -54,6 +56,7 @@ export class UploadsService {
     private readonly series: SeriesService,
     private readonly events: RealtimeEvents,
     private readonly jobs: JobRunner,
+    private readonly quotas: UploadQuotas,
     config: ConfigService,
   ) {
     this.config = config.getOrThrow<AppConfig>(APP_CONFIG);
@@ -113,6 +116,31 @@ export class UploadsService {
     return {
       series: added.map((a) => ({ id: a.series.id, name: a.series.name, version: a.version.number, created: a.created })),
       fields: fields.map((f) => ({ id: f.id, name: f.longName || f.variable })),
+    };
+  }
+
+  /** The group's staged uploads (nothing imported yet), oldest first, and the asking person's quota. */
+  async listStaged(user: User, groupId: string): Promise<StagedUploadsList> {
+    await this.groups.authorize(user, groupId, 'upload-series');
+    const rows = await this.em.find(UploadedFile, { group: groupId, importedAt: null }, { populate: ['uploadedBy'], orderBy: { createdAt: 'asc' } });
+    const limits = this.config.uploads;
+    return {
+      uploads: rows.map((u) => ({
+        uploadId: u.id,
+        fileName: u.originalName,
+        size: u.size,
+        format: u.format,
+        uploadedBy: { id: u.uploadedBy.id, name: u.uploadedBy.name },
+        createdAt: u.createdAt.toISOString(),
+        expiresAt: new Date(u.createdAt.getTime() + limits.stagedTtlHours * 3600_000).toISOString(),
+      })),
+      quota: {
+        stagedBytes: await this.quotas.stagedBytes(user.id),
+        stagedBytesPerPerson: limits.stagedBytesPerPerson,
+        concurrentPerPerson: limits.concurrentPerPerson,
+        stagedTtlHours: limits.stagedTtlHours,
+        idleTimeoutSeconds: limits.idleTimeoutMs / 1000,
+      },
     };
   }
 
