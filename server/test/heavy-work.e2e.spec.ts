@@ -1,10 +1,12 @@
-import { writeFileSync } from 'node:fs';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { ImportUploadResponse, UploadPreview } from '@upwell/common';
 import { writeCraftedField } from './crafted-netcdf';
 import { buildGroup, buildUser, type TestUser } from './factories';
+import { startServer } from './child-server';
 import { startTestApp, type TestApp } from './test-app';
 
 // Heavy NetCDF work runs in worker threads (server/src/jobs) and malformed or oversized files are
@@ -83,6 +85,22 @@ describe('heavy NetCDF work over HTTP', () => {
       expect(res.body.message).toMatch(/12 latitude rows × 24 longitudes = 288 cells.*NETCDF_MAX_READ_CELLS/);
     } finally {
       await limited.close();
+    }
+  });
+
+  it('runs jobs in the built server too (server/dist/jobs/job-worker.js beside the compiled runner)', async () => {
+    const dataDir = mkdtempSync(join(tmpdir(), 'upwell-built-jobs-'));
+    const built = await startServer(dataDir, { JOB_WORKERS: '1' });
+    try {
+      const person = await buildUser(built.url);
+      const group = (await buildGroup(built.url, person)).id;
+      const path = join(dataDir, 'field.nc');
+      writeCraftedField(path, 3, 12, 24);
+      const preview = (await request(built.url).post(`/api/groups/${group}/uploads`).set(person.auth).attach('file', path).expect(201)).body as UploadPreview;
+      expect(preview.netcdf!.variables.find((v) => v.name === 'dic')).toMatchObject({ use: 'grid', shape: [3, 12, 24], start: '2000-01' });
+    } finally {
+      built.child.kill('SIGTERM');
+      rmSync(dataDir, { recursive: true, force: true });
     }
   });
 });
