@@ -1,5 +1,6 @@
 import { createHash, randomUUID } from 'node:crypto';
 import { createWriteStream, mkdirSync, readdirSync, rmSync, statSync } from 'node:fs';
+import { hostname } from 'node:os';
 import { join } from 'node:path';
 import { Transform } from 'node:stream';
 import { pipeline } from 'node:stream/promises';
@@ -24,7 +25,7 @@ export function hashingDiskStorage(tmpDir: string, idleTimeoutMs: number): Stora
   sweepStaleParts(tmpDir, idleTimeoutMs);
   return {
     _handleFile(req: Request, file, cb) {
-      const path = join(tmpDir, `${randomUUID()}.part`);
+      const path = join(tmpDir, partName());
       const hash = createHash('sha256');
       const ticket = (req as Request & { uploadTicket?: UploadTicket }).uploadTicket;
       let size = 0;
@@ -55,11 +56,32 @@ export function hashingDiskStorage(tmpDir: string, idleTimeoutMs: number): Stora
   };
 }
 
+// Part files carry their writer's host and pid, so a server starting after a crash removes its
+// dead predecessor's parts at once, and never those of a live process sharing DATA_DIR.
+const HOST = hostname().replace(/[^A-Za-z0-9-]/g, '_');
+const partName = () => `${HOST}.${process.pid}.${randomUUID()}.part`;
+
+/** Whether a process with this pid runs on this host (signal 0 only checks; EPERM means it exists). */
+function alive(pid: number): boolean {
+  try {
+    process.kill(pid, 0);
+    return true;
+  } catch (err) {
+    return (err as NodeJS.ErrnoException).code === 'EPERM';
+  }
+}
+
+/** True when a part file was written by a process of this host that no longer runs. */
+function orphaned(name: string): boolean {
+  const [host, pid] = name.split('.');
+  return host === HOST && /^\d+$/.test(pid) && Number(pid) !== process.pid && !alive(Number(pid));
+}
+
 /**
  * Removes part files a killed server left behind; they were never uploads (no row points at them).
  * A live upload writes at least once per idle timeout (or is cut), so a part file untouched for
  * longer than that, plus a minute of slack, belongs to no upload — here or in another process on
- * the same DATA_DIR.
+ * the same DATA_DIR; one whose writer on this host is gone is removed at once.
  */
 export function sweepStaleParts(tmpDir: string, idleTimeoutMs: number): number {
   const now = Date.now();
@@ -68,7 +90,7 @@ export function sweepStaleParts(tmpDir: string, idleTimeoutMs: number): number {
     if (!name.endsWith('.part')) continue;
     const path = join(tmpDir, name);
     try {
-      if (now - statSync(path).mtimeMs > idleTimeoutMs + 60_000) {
+      if (orphaned(name) || now - statSync(path).mtimeMs > idleTimeoutMs + 60_000) {
         rmSync(path, { force: true });
         removed++;
       }
