@@ -24,10 +24,17 @@ export class UploadGateGuard implements CanActivate {
     const req = http.getRequest<GatedRequest>();
     const res = http.getResponse<Response>();
     const groupId = req.params.groupId;
-    if (typeof groupId !== 'string' || !UUID.test(groupId)) throw new BadRequestException('groupId must be a UUID');
-    await this.groups.authorize(req.user, groupId, 'upload-series');
-    const length = Number(req.headers['content-length']);
-    const ticket = await this.quotas.begin(req.user.id, Number.isFinite(length) ? length : null);
+    let ticket: UploadTicket;
+    try {
+      if (typeof groupId !== 'string' || !UUID.test(groupId)) throw new BadRequestException('groupId must be a UUID');
+      await this.groups.authorize(req.user, groupId, 'upload-series');
+      const length = Number(req.headers['content-length']);
+      ticket = await this.quotas.begin(req.user.id, Number.isFinite(length) ? length : null);
+    } catch (refusal) {
+      // The body is never read: close the connection after the answer rather than drain what is still coming.
+      res.setHeader('Connection', 'close');
+      throw refusal;
+    }
     req.uploadTicket = ticket;
     res.on('close', () => ticket.release());
     const idleMs = this.quotas.limits.idleTimeoutMs;
