@@ -61,4 +61,4 @@ export * from './grid/cell-areas';
 export * from './grid/cell-areas-from-centres';
 export * from './grid/area-mean';
 export * from './grid/area-mean-series';
-export * from './grid/zonal-mean';
+export * from './grid/weighted-sum';

@@ -37,6 +37,9 @@ export async function buildApp(env: NodeJS.ProcessEnv = process.env, opts: { log
   );
   // Browsers may call the API from the app's own origin only; same-origin requests need no CORS headers at all.
   app.enableCors({ origin: [config.appOrigin], credentials: false });
+  // Node cuts any request not received within 300 s (requestTimeout), which ended slow but steady
+  // uploads; uploads get an idle timeout instead (UploadGateGuard), headers keep Node's headersTimeout.
+  (app.getHttpServer() as import('node:http').Server).requestTimeout = 0;
   installJsonBodyParser(app);
   app.setGlobalPrefix('api', { exclude: [] });
   app.useGlobalFilters(new AllExceptionsFilter());

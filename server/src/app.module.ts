@@ -16,6 +16,7 @@ import { RealtimeModule } from './realtime/realtime.module';
 import { SeriesModule } from './series/series.module';
 import { UploadsModule } from './uploads/uploads.module';
 import { FieldsModule } from './fields/fields.module';
+import { JobsModule } from './jobs/jobs.module';
 import { FiguresModule } from './figures/figures.module';
 import { EventSetsModule } from './event-sets/event-sets.module';
 import { CollaborationModule } from './collaboration/collaboration.module';
@@ -47,6 +48,7 @@ export class AppModule {
         ...(config.webDist
           ? [ServeStaticModule.forRoot({ rootPath: config.webDist, exclude: ['/api{/*path}', '/socket.io{/*path}'] })]
           : []),
+        JobsModule,
         AuthModule,
         UsersModule,
         GroupsModule,

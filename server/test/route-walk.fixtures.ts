@@ -152,6 +152,7 @@ export const ROUTE_RULES: Record<string, RouteRule> = {
   'POST /api/analysis/budget': { scope: 'self', body: () => ({ tendency: monthly(), terms: { advection: monthly() } }) },
   'POST /api/analysis/integrate': { scope: 'self', body: () => ({ series: monthly(), units: 'Pg C/yr', from: '2000-01', to: '2000-12' }) },
   'POST /api/groups/{groupId}/uploads': { scope: 'group', action: 'upload-series', multipart: true },
+  'GET /api/groups/{groupId}/uploads': { scope: 'group', action: 'upload-series' },
   'POST /api/uploads/{uploadId}/import': { scope: 'group', action: 'upload-series', body: () => importIndex },
   'DELETE /api/uploads/{uploadId}': { scope: 'group', action: 'upload-series' },
   'GET /api/groups/{groupId}/fields': { scope: 'group', action: 'view' },

@@ -64,3 +64,29 @@ export const importUploadResponseSchema = z.object({
   fields: z.array(z.object({ id: z.string(), name: z.string() })),
 });
 export type ImportUploadResponse = z.infer<typeof importUploadResponseSchema>;
+
+/** One staged upload: received and previewed, nothing imported from it yet; deleted at `expiresAt`. */
+export const stagedUploadSchema = z.object({
+  uploadId: z.string(),
+  fileName: z.string(),
+  size: z.number(),
+  format: z.enum(['csv', 'netcdf-classic', 'netcdf4']),
+  uploadedBy: z.object({ id: z.string(), name: z.string() }),
+  createdAt: z.string(),
+  expiresAt: z.string(),
+});
+export type StagedUpload = z.infer<typeof stagedUploadSchema>;
+
+/** Answer of GET /api/groups/:groupId/uploads: the group's staged uploads and the asking person's quota. */
+export const stagedUploadsListSchema = z.object({
+  uploads: z.array(stagedUploadSchema),
+  quota: z.object({
+    /** Bytes the asking person's staged uploads hold (all groups), against `stagedBytesPerPerson`. */
+    stagedBytes: z.number(),
+    stagedBytesPerPerson: z.number(),
+    concurrentPerPerson: z.number(),
+    stagedTtlHours: z.number(),
+    idleTimeoutSeconds: z.number(),
+  }),
+});
+export type StagedUploadsList = z.infer<typeof stagedUploadsListSchema>;

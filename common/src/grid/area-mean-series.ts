@@ -1,3 +1,5 @@
+import { weightedSum } from './weighted-sum';
+
 /**
  * Area-weighted mean time series of a (time, lat, lon) field stored row-major in one typed array,
  * NaN = missing: out[t] = Σ A·v / Σ A over the present (and unmasked) cells of step t, NaN when
@@ -27,7 +29,7 @@ export function areaMeanSeries(
       let s = 0;
       let w = 0;
       for (let i = 0; i < nlat; i++) {
-        weightedRowSum(field, t * cells + i * nlon, weight, i * nlon, nlon, ROW);
+        weightedSum(field, t * cells + i * nlon, weight, i * nlon, nlon, ROW);
         s += ROW[0];
         w += ROW[1];
       }
@@ -64,24 +66,6 @@ function stepMeanUniformRows(field: Float32Array | Float64Array, base: number, n
 
 // Scratch for the row kernels' two results (sum, count or weight); reused, never allocated per row.
 const ROW = new Float64Array(2);
-
-/** Σ w·v and Σ w over the present values of field[row..row+n) with weights weight[w0..w0+n). */
-function weightedRowSum(field: Float32Array | Float64Array, row: number, weight: Float64Array, w0: number, n: number, out: Float64Array): void {
-  let s0 = 0, s1 = 0, ww0 = 0, ww1 = 0;
-  let j = 0;
-  for (; j + 1 < n; j += 2) {
-    const v0 = field[row + j], v1 = field[row + j + 1];
-    // Masked cells have weight 0, so they add nothing; only NaN needs a test.
-    if (v0 === v0) { s0 += weight[w0 + j] * v0; ww0 += weight[w0 + j]; }
-    if (v1 === v1) { s1 += weight[w0 + j + 1] * v1; ww1 += weight[w0 + j + 1]; }
-  }
-  if (j < n) {
-    const v = field[row + j];
-    if (v === v) { s0 += weight[w0 + j] * v; ww0 += weight[w0 + j]; }
-  }
-  out[0] = s0 + s1;
-  out[1] = ww0 + ww1;
-}
 
 /** The per-row area when every cell of each row has the same area, else null. */
 function uniformRows(areas: ArrayLike<number>, nlat: number, nlon: number): Float64Array | null {

@@ -1,6 +1,8 @@
 import { randomBytes } from 'node:crypto';
 import { existsSync, linkSync, mkdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { availableParallelism } from 'node:os';
 import { join, resolve } from 'node:path';
+import { DEFAULT_NETCDF_LIMITS, type NetcdfLimits } from '../series/netcdf/size-limits';
 
 /** Settings the server runs with, read once from the environment at start. */
 export interface AppConfig {
@@ -33,6 +35,24 @@ export interface AppConfig {
   invitationTtlHours: number;
   /** Invitations one person may send per hour. */
   invitationsPerHour: number;
+  /** Worker threads for previews, imports and reductions (JOB_WORKERS; default one per core). */
+  jobWorkers: number;
+  /** Cells one NetCDF variable may declare, and values one read may bring into memory. */
+  netcdfLimits: NetcdfLimits;
+  /** Upload quotas and timing (see README "Uploads"). */
+  uploads: UploadLimits;
+}
+
+/** How much one person may upload, and how long staged files and silent uploads last. */
+export interface UploadLimits {
+  /** Uploads one person may send at the same time (UPLOAD_CONCURRENT_PER_PERSON). */
+  concurrentPerPerson: number;
+  /** Bytes one person's staged (not yet imported) uploads may take, in-flight ones included (UPLOAD_STAGED_BYTES_PER_PERSON). */
+  stagedBytesPerPerson: number;
+  /** A staged upload nothing was imported from is deleted after this many hours (UPLOAD_STAGED_TTL_HOURS). */
+  stagedTtlHours: number;
+  /** An upload that sends nothing for this long is cut (UPLOAD_IDLE_TIMEOUT_SECONDS); there is no total time limit. */
+  idleTimeoutMs: number;
 }
 
 /** Name under which the config is registered with @nestjs/config. */
@@ -152,5 +172,29 @@ export function loadAppConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     appOrigin: origin(env.APP_ORIGIN, `http://localhost:${port}`),
     redisUrl: redisUrl(env.REDIS_URL),
     ...mailConfig(env),
+    ...heavyWorkConfig(env),
+  };
+}
+
+function atLeastOne(name: string, raw: string | undefined, fallback: number): number {
+  const n = positiveInt(name, raw, fallback);
+  if (n < 1) throw new Error(`${name} must be at least 1, got "${raw}"`);
+  return n;
+}
+
+function heavyWorkConfig(env: NodeJS.ProcessEnv) {
+  const uploadMaxBytes = positiveInt('UPLOAD_MAX_BYTES', env.UPLOAD_MAX_BYTES, 2 * 1024 ** 3);
+  return {
+    jobWorkers: atLeastOne('JOB_WORKERS', env.JOB_WORKERS, availableParallelism()),
+    netcdfLimits: {
+      maxCells: atLeastOne('NETCDF_MAX_CELLS', env.NETCDF_MAX_CELLS, DEFAULT_NETCDF_LIMITS.maxCells),
+      maxReadCells: atLeastOne('NETCDF_MAX_READ_CELLS', env.NETCDF_MAX_READ_CELLS, DEFAULT_NETCDF_LIMITS.maxReadCells),
+    },
+    uploads: {
+      concurrentPerPerson: atLeastOne('UPLOAD_CONCURRENT_PER_PERSON', env.UPLOAD_CONCURRENT_PER_PERSON, 2),
+      stagedBytesPerPerson: atLeastOne('UPLOAD_STAGED_BYTES_PER_PERSON', env.UPLOAD_STAGED_BYTES_PER_PERSON, 2 * uploadMaxBytes),
+      stagedTtlHours: atLeastOne('UPLOAD_STAGED_TTL_HOURS', env.UPLOAD_STAGED_TTL_HOURS, 24),
+      idleTimeoutMs: 1000 * atLeastOne('UPLOAD_IDLE_TIMEOUT_SECONDS', env.UPLOAD_IDLE_TIMEOUT_SECONDS, 60),
+    },
   };
 }

@@ -1,11 +1,13 @@
 import { EntityManager } from '@mikro-orm/sqlite';
-import { BadRequestException, Injectable, NotFoundException, UnprocessableEntityException } from '@nestjs/common';
+import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import type { FieldsList, ReduceFieldBody, ReduceFieldResponse, ZonalMeanFieldView } from '@upwell/common';
 import { join } from 'node:path';
 import { APP_CONFIG, type AppConfig } from '../config/app-config';
 import { GroupPolicy } from '../groups/group.policy';
-import { NetcdfImportError, openNetcdf, reduceBox, zonalMeanField, type NetcdfFile } from '../series/netcdf';
+import { JobRunner } from '../jobs/job-runner';
+import { netcdfFailureAs4xx } from '../jobs/netcdf-failure';
+import type { NetcdfLimits } from '../series/netcdf';
 import { Series } from '../series/series.entity';
 import { SeriesService } from '../series/series.service';
 import type { User } from '../users/user.entity';
@@ -16,14 +18,18 @@ import { presentGriddedField, presentZonalField } from './fields.presenter';
 @Injectable()
 export class FieldsService {
   private readonly dataDir: string;
+  private readonly limits: NetcdfLimits;
 
   constructor(
     private readonly em: EntityManager,
     private readonly groups: GroupPolicy,
     private readonly series: SeriesService,
+    private readonly jobs: JobRunner,
     config: ConfigService,
   ) {
-    this.dataDir = config.getOrThrow<AppConfig>(APP_CONFIG).dataDir;
+    const app = config.getOrThrow<AppConfig>(APP_CONFIG);
+    this.dataDir = app.dataDir;
+    this.limits = app.netcdfLimits;
   }
 
   async list(user: User, groupId: string): Promise<FieldsList> {
@@ -46,7 +52,7 @@ export class FieldsService {
     await this.groups.authorize(user, field.group.id, 'upload-series');
     const path = join(this.dataDir, field.file.storedPath);
     if (body.kind === 'zonal-mean') {
-      const z = await this.withFile(path, (f) => zonalMeanField(f, field.variable, { lon: body.lon, lat: body.lat, depth: body.depth }));
+      const z = await netcdfFailureAs4xx(this.jobs.run('zonal-mean', { path, limits: this.limits, variable: field.variable, options: { lon: body.lon, lat: body.lat, depth: body.depth } }));
       const n = z.lat.length;
       const values = Buffer.alloc(z.values.length * n * 8);
       z.values.forEach((row, m) => row.forEach((v, j) => values.writeDoubleLE(v ?? Number.NaN, (m * n + j) * 8)));
@@ -66,7 +72,8 @@ export class FieldsService {
       return { series: null, zonal: presentZonalField(stored) };
     }
     const method = body.kind === 'box-integral' ? 'integral' : 'mean';
-    const r = await this.withFile(path, (f) => reduceBox(f, field.variable, { box: { lat: body.lat, lon: body.lon, depth: body.depth }, method }));
+    const box = { lat: body.lat, lon: body.lon, ...(body.depth ? { depth: body.depth } : {}) };
+    const r = await netcdfFailureAs4xx(this.jobs.run('reduce-box', { path, limits: this.limits, variable: field.variable, options: { box, method } }));
     const described = `${r.provenance.method} of ${field.variable} over ${body.lat[0]}…${body.lat[1]}°N, ${body.lon[0]}…${body.lon[1]}°E${body.depth ? `, ${body.depth[0]}–${body.depth[1]} m` : ''} (${r.provenance.radiusConvention})`;
     const version = { start: r.start, values: r.values, file: field.file, transform: { type: 'grid-reduction' as const, fieldId: field.id, method: r.provenance.method, description: described } };
     const added = await this.em.transactional(async (em) => {
@@ -79,18 +86,5 @@ export class FieldsService {
     });
     this.series.announce([added], user);
     return { series: { id: added.series.id, name: added.series.name, version: added.version.number, created: added.created }, zonal: null };
-  }
-
-  private async withFile<T>(path: string, work: (file: NetcdfFile) => T): Promise<T> {
-    let file: NetcdfFile | null = null;
-    try {
-      file = await openNetcdf(path);
-      return work(file);
-    } catch (err) {
-      if (err instanceof NetcdfImportError) throw new UnprocessableEntityException(err.message);
-      throw err;
-    } finally {
-      await file?.close();
-    }
   }
 }

@@ -1,4 +1,4 @@
-import { BadRequestException, Body, Controller, Delete, HttpCode, Param, Post, UploadedFile, UseInterceptors } from '@nestjs/common';
+import { BadRequestException, Body, Controller, Delete, Get, HttpCode, Param, Post, UploadedFile, UseGuards, UseInterceptors } from '@nestjs/common';
 import { ApiBearerAuth, ApiBody, ApiConsumes, ApiOperation, ApiTags } from '@nestjs/swagger';
 import { FileInterceptor } from '@nestjs/platform-express';
 import { csvImportOptionsSchema, importUploadRequestSchema, type CsvImportOptions, type ImportUploadBody } from '@upwell/common';
@@ -7,6 +7,7 @@ import { ApiJsonBody } from '../common/api-docs';
 import { uuidParam } from '../common/ids';
 import { describeIssues, ZodValidationPipe } from '../common/zod-validation.pipe';
 import { User } from '../users/user.entity';
+import { UploadGateGuard } from './upload-gate.guard';
 import { UploadsService, type ReceivedFile } from './uploads.service';
 
 /** The multipart `options` field: JSON of the CSV reading overrides, or absent. */
@@ -41,6 +42,8 @@ export class UploadsController {
       properties: { file: { type: 'string', format: 'binary' }, options: { type: 'string', description: 'JSON of CSV reading overrides' } },
     },
   })
+  // The gate checks membership and quotas before the interceptor reads the body.
+  @UseGuards(UploadGateGuard)
   @UseInterceptors(FileInterceptor('file'))
   stage(
     @CurrentUser() user: User,
@@ -49,6 +52,12 @@ export class UploadsController {
     @Body() body: Record<string, unknown>,
   ) {
     return this.uploads.stage(user, groupId, file, parseOptions(body?.options));
+  }
+
+  @Get('groups/:groupId/uploads')
+  @ApiOperation({ summary: 'Staged uploads of the group (nothing imported yet, deleted when they expire) and your upload quota' })
+  listStaged(@CurrentUser() user: User, @Param('groupId', uuidParam('groupId')) groupId: string) {
+    return this.uploads.listStaged(user, groupId);
   }
 
   @Post('uploads/:uploadId/import')

@@ -8,6 +8,9 @@ import { SeriesModule } from '../series/series.module';
 import { hashingDiskStorage } from './hashing-disk-storage';
 import { UploadsController } from './uploads.controller';
 import { UploadsService } from './uploads.service';
+import { UploadQuotas } from './upload-quotas';
+import { UploadGateGuard } from './upload-gate.guard';
+import { StagedUploadsSweeper } from './staged-uploads-sweeper';
 
 @Module({
   imports: [
@@ -18,7 +21,7 @@ import { UploadsService } from './uploads.service';
       useFactory: (config: ConfigService) => {
         const app = config.getOrThrow<AppConfig>(APP_CONFIG);
         return {
-          storage: hashingDiskStorage(join(app.dataDir, 'uploads', 'tmp')),
+          storage: hashingDiskStorage(join(app.dataDir, 'uploads', 'tmp'), app.uploads.idleTimeoutMs),
           limits: { fileSize: app.uploadMaxBytes, files: 1, fields: 5, fieldSize: 64 * 1024, parts: 8 },
           // Browsers send the file name as raw UTF-8 (HTML's multipart/form-data encoding); busboy's default reads it as Latin-1.
           defParamCharset: 'utf8',
@@ -27,6 +30,6 @@ import { UploadsService } from './uploads.service';
     }),
   ],
   controllers: [UploadsController],
-  providers: [UploadsService],
+  providers: [UploadsService, UploadQuotas, UploadGateGuard, StagedUploadsSweeper],
 })
 export class UploadsModule {}

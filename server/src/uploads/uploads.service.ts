@@ -14,6 +14,7 @@ import {
   type CsvImportOptions,
   type ImportUploadBody,
   type ImportUploadResponse,
+  type StagedUploadsList,
   type UploadPreview,
 } from '@upwell/common';
 import { createReadStream } from 'node:fs';
@@ -33,8 +34,9 @@ import { cleanFileName, sniffFormat } from './sniff-format';
 import { UploadedFile } from './uploaded-file.entity';
 import { formatDepthLayer } from './depth-layer';
 import { GriddedField } from '../fields/field.entity';
-import { describeNetcdf, importSeries, NetcdfImportError, openNetcdf, type NetcdfFile } from '../series/netcdf';
-import { presentNetcdfPreview } from './netcdf-preview.presenter';
+import { JobRunner } from '../jobs/job-runner';
+import { UploadQuotas } from './upload-quotas';
+import { netcdfFailureAs4xx } from '../jobs/netcdf-failure';
 
 /** A file as Multer and the hashing storage hand it over. */
 export type ReceivedFile = HashedFile & { originalname: string };
@@ -53,6 +55,8 @@ export class UploadsService {
     private readonly groups: GroupPolicy,
     private readonly series: SeriesService,
     private readonly events: RealtimeEvents,
+    private readonly jobs: JobRunner,
+    private readonly quotas: UploadQuotas,
     config: ConfigService,
   ) {
     this.config = config.getOrThrow<AppConfig>(APP_CONFIG);
@@ -115,6 +119,31 @@ export class UploadsService {
     };
   }
 
+  /** The group's staged uploads (nothing imported yet), oldest first, and the asking person's quota. */
+  async listStaged(user: User, groupId: string): Promise<StagedUploadsList> {
+    await this.groups.authorize(user, groupId, 'upload-series');
+    const rows = await this.em.find(UploadedFile, { group: groupId, importedAt: null }, { populate: ['uploadedBy'], orderBy: { createdAt: 'asc' } });
+    const limits = this.config.uploads;
+    return {
+      uploads: rows.map((u) => ({
+        uploadId: u.id,
+        fileName: u.originalName,
+        size: u.size,
+        format: u.format,
+        uploadedBy: { id: u.uploadedBy.id, name: u.uploadedBy.name },
+        createdAt: u.createdAt.toISOString(),
+        expiresAt: new Date(u.createdAt.getTime() + limits.stagedTtlHours * 3600_000).toISOString(),
+      })),
+      quota: {
+        stagedBytes: await this.quotas.stagedBytes(user.id),
+        stagedBytesPerPerson: limits.stagedBytesPerPerson,
+        concurrentPerPerson: limits.concurrentPerPerson,
+        stagedTtlHours: limits.stagedTtlHours,
+        idleTimeoutSeconds: limits.idleTimeoutMs / 1000,
+      },
+    };
+  }
+
   async discard(user: User, uploadId: string): Promise<void> {
     const upload = await this.em.findOne(UploadedFile, { id: uploadId }, { populate: ['group'] });
     if (!upload) throw new NotFoundException('no such upload');
@@ -135,24 +164,8 @@ export class UploadsService {
       return { ...base, csv, netcdf: null };
     }
     this.events.uploadProgress(user.id, { uploadId: upload.id, phase: 'parsing', fraction: null });
-    const netcdf = await this.withNetcdf(path, (file) => presentNetcdfPreview(describeNetcdf(file)));
+    const netcdf = await netcdfFailureAs4xx(this.jobs.run('netcdf-preview', { path, limits: this.config.netcdfLimits }));
     return { ...base, csv: null, netcdf };
-  }
-
-  /** Opens a stored NetCDF file for one piece of work; a file that cannot be read becomes a 422 naming where. */
-  private async withNetcdf<T>(path: string, work: (file: NetcdfFile) => T | Promise<T>): Promise<T> {
-    let file: NetcdfFile | null = null;
-    try {
-      file = await openNetcdf(path);
-      return await work(file);
-    } catch (err) {
-      if (err instanceof NetcdfImportError) {
-        throw new UnprocessableEntityException({ statusCode: 422, error: 'Unprocessable Entity', message: err.message, code: err.code, where: err.where });
-      }
-      throw err;
-    } finally {
-      await file?.close();
-    }
   }
 
   private async parseCsv(upload: UploadedFile, path: string, user: User) {
@@ -195,54 +208,40 @@ export class UploadsService {
     }
   }
 
-  /** 1-D variables of a NetCDF file, named in `columns` by variable name, as series. */
-  private seriesFromNetcdf(path: string, body: ImportUploadBody) {
-    return this.withNetcdf(path, (file) =>
-      body.columns
-        .filter((c) => !c.skip)
-        .map((c) => {
-          if (c.skip) throw new Error('unreachable');
-          if (!file.variables.some((v) => v.name === c.column)) throw new BadRequestException(`the file has no variable “${c.column}”`);
-          const s = importSeries(file, c.column);
-          return {
-            column: c.column,
-            start: s.start,
-            values: s.values,
-            transform: { type: 'netcdf-variable' as const, variable: c.column },
-            meta: {
-              name: c.name,
-              kind: c.kind,
-              variable: c.variable,
-              units: c.units || s.units || '',
-              region: c.region ?? '',
-              depthLayer: formatDepthLayer(c.depthLayer ?? null),
-              source: c.source ?? '',
-              notes: c.notes ?? '',
-            },
-          };
-        }),
-    );
+  /** 1-D variables of a NetCDF file, named in `columns` by variable name, as series (read in a worker thread). */
+  private async seriesFromNetcdf(path: string, body: ImportUploadBody) {
+    const wanted = body.columns.flatMap((c) => (c.skip ? [] : [c]));
+    if (wanted.length === 0) return [];
+    const imported = await netcdfFailureAs4xx(this.jobs.run('netcdf-series', { path, limits: this.config.netcdfLimits, variables: wanted.map((c) => c.column) }));
+    return wanted.map((c, i) => {
+      const s = imported[i];
+      return {
+        column: c.column,
+        start: s.start,
+        values: s.values,
+        transform: { type: 'netcdf-variable' as const, variable: c.column },
+        meta: {
+          name: c.name,
+          kind: c.kind,
+          variable: c.variable,
+          units: c.units || s.units || '',
+          region: c.region ?? '',
+          depthLayer: formatDepthLayer(c.depthLayer ?? null),
+          source: c.source ?? '',
+          notes: c.notes ?? '',
+        },
+      };
+    });
   }
 
   /** Gridded variables to keep as fields (the values stay in the stored file). */
   private async fieldsFromNetcdf(upload: UploadedFile, path: string, body: ImportUploadBody, user: User): Promise<GriddedField[]> {
     if (!body.grids.length) return [];
     if (upload.format === 'csv') throw new BadRequestException('a CSV table has no gridded variables');
-    const { described, extent } = await this.withNetcdf(path, async (file) => {
-      const d = describeNetcdf(file);
-      const range = async (role: string) => {
-        const c = d.coordinates.find((x) => x.role === role);
-        if (!c) return [Number.NaN, Number.NaN];
-        const v = Array.from(await file.read(c.variable)).filter(Number.isFinite);
-        return [Math.min(...v), Math.max(...v)];
-      };
-      const [south, north] = await range('latitude');
-      const [west, east] = await range('longitude');
-      return { described: d, extent: [south, north, west, east] as [number, number, number, number] };
-    });
+    const { fields, extent } = await netcdfFailureAs4xx(this.jobs.run('netcdf-fields', { path, limits: this.config.netcdfLimits }));
     return body.grids.map((g) => {
-      const c = described.candidates.find((x) => x.name === g.variable);
-      if (!c || c.kind !== 'field') throw new BadRequestException(`“${g.variable}” is not a gridded (time, lat, lon) variable of this file`);
+      const c = fields.find((x) => x.name === g.variable);
+      if (!c) throw new BadRequestException(`“${g.variable}” is not a gridded (time, lat, lon) variable of this file`);
       return this.em.create(GriddedField, {
         group: upload.group,
         file: upload,

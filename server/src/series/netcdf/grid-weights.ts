@@ -5,6 +5,7 @@ import { createCfDecoder, decodedCopy } from './cf-decoder';
 import type { GridLayout } from './grid-layout';
 import { longitudeOverlap } from './longitude-overlap';
 import { NetcdfImportError } from './netcdf-import-error';
+import { DEFAULT_NETCDF_LIMITS } from './size-limits';
 import type { NetcdfFile } from './types';
 
 /** A latitude–longitude box, degrees; longitude runs eastward from `lon[0]` to `lon[1]`. Depth in metres, positive down. */
@@ -41,7 +42,7 @@ export interface GridWeights {
  * form with clipped edges. When the variable's `cell_measures` names an area variable present in
  * the file (CF 1.11 §7.2), its areas are used, times the fraction of the cell inside the box.
  */
-export function gridWeights(file: NetcdfFile, layout: GridLayout, box: Box, radius: number, useCellMeasures = true): GridWeights {
+export function gridWeights(file: NetcdfFile, layout: GridLayout, box: Box, radius: number, useCellMeasures = true, maxPlaneCells = DEFAULT_NETCDF_LIMITS.maxReadCells): GridWeights {
   checkBox(box, layout);
   const notes: string[] = [];
   const lat = readCellEdges(file, layout.lat);
@@ -56,6 +57,10 @@ export function gridWeights(file: NetcdfFile, layout: GridLayout, box: Box, radi
   if (rows.length === 0) throw new NetcdfImportError('bad-coordinates', layout.lat.variable, `no latitude cell of ${layout.variable.name} lies in ${south}..${north}; the grid covers ${Math.min(...lat.lo)}..${Math.max(...lat.hi)}`);
   const rowStart = rows[0];
   const rowCount = rows[rows.length - 1] - rowStart + 1;
+  // Checked before anything of the box's size is allocated: weights and one plane of values are held at once.
+  if (rowCount * nlon > maxPlaneCells) {
+    throw new NetcdfImportError('too-large', layout.variable.name, `the box covers ${rowCount} latitude rows × ${nlon} longitudes = ${rowCount * nlon} cells of ${layout.variable.name} per level, more than the ${maxPlaneCells} this server holds at once (NETCDF_MAX_READ_CELLS); choose a smaller latitude range`);
+  }
 
   const overlapDeg = new Float64Array(nlon);
   const widthDeg = new Float64Array(nlon);

@@ -1,6 +1,7 @@
 import { checkSlab } from './check-slab';
 import { loadH5wasm } from './load-esm';
 import { NetcdfImportError } from './netcdf-import-error';
+import { cellCount, DEFLATE_MAX_RATIO } from './size-limits';
 import type { Hyperslab, NcAttributes, NcAttributeValue, NcDimension, NcDtype, NcVariable, NetcdfFile, NumericArray } from './types';
 
 type H5 = Awaited<ReturnType<typeof loadH5wasm>>;
@@ -22,7 +23,7 @@ const H5T_STRING = 3;
  * is read (a note says so when there are others). An HDF5 file with no dimension scales and no
  * NetCDF-4 marker is refused: its datasets have no named dimensions to find time or latitude by.
  */
-export async function openHdf5File(path: string): Promise<NetcdfFile> {
+export async function openHdf5File(path: string, fileBytes: number): Promise<NetcdfFile> {
   const h5 = await loadH5wasm();
   let file: InstanceType<H5['File']>;
   try {
@@ -34,7 +35,7 @@ export async function openHdf5File(path: string): Promise<NetcdfFile> {
     throw new NetcdfImportError('corrupt', 'file', 'the HDF5 library could not open the file; it is damaged or not HDF5');
   }
   try {
-    return describeRoot(path, h5, file);
+    return describeRoot(path, h5, file, fileBytes);
   } catch (error) {
     file.close();
     if (error instanceof NetcdfImportError) throw error;
@@ -42,7 +43,7 @@ export async function openHdf5File(path: string): Promise<NetcdfFile> {
   }
 }
 
-function describeRoot(path: string, h5: H5, file: InstanceType<H5['File']>): NetcdfFile {
+function describeRoot(path: string, h5: H5, file: InstanceType<H5['File']>, fileBytes: number): NetcdfFile {
   const notes: string[] = [];
   const datasets = new Map<string, Dataset>();
   const groups: string[] = [];
@@ -81,6 +82,7 @@ function describeRoot(path: string, h5: H5, file: InstanceType<H5['File']>): Net
     if (isScale(d) && typeof nameAttr === 'string' && nameAttr.startsWith(PURE_DIMENSION)) continue;
     const shape = d.shape ?? [];
     const dims = shape.map((_, i) => dimensionName(d, name, i, isScale(d), dimById, notes));
+    assertPlausibleStorage(d, name, dims, shape, fileBytes);
     variables.push({ name, dims, shape, dtype: dtypeOf(d), attributes: readAttributes(d.attrs) });
   }
   const byName = new Map(variables.map((v) => [v.name, v]));
@@ -115,6 +117,30 @@ function describeRoot(path: string, h5: H5, file: InstanceType<H5['File']>): Net
       file.close();
     },
   };
+}
+
+/**
+ * Refuses a variable whose declared bytes cannot be in a file of this length: uncompressed data must
+ * fit in the file, and compressed chunks cannot hold more than deflate's maximum ratio allows. An
+ * unwritten (fill-only) variable is refused too: it declares data the file does not hold.
+ */
+function assertPlausibleStorage(d: Dataset, name: string, dims: string[], shape: number[], fileBytes: number): void {
+  const m = d.metadata;
+  const declared = cellCount(shape) * (m.size || 1);
+  let compressed = false;
+  try {
+    compressed = m.chunks != null && d.filters.length > 0;
+  } catch {
+    // No filter list readable: judge it as uncompressed.
+  }
+  const room = compressed ? fileBytes * DEFLATE_MAX_RATIO : fileBytes;
+  if (declared > room) {
+    throw new NetcdfImportError(
+      'implausible-size',
+      name,
+      `variable ${name} (${dims.map((x, i) => `${x}=${shape[i]}`).join(', ')}) declares ${declared} bytes, but the file has ${fileBytes} bytes${compressed ? `, and compression cannot exceed ${DEFLATE_MAX_RATIO}:1` : ' and the variable is not compressed'}: its sizes cannot be real`,
+    );
+  }
 }
 
 function dimensionName(d: Dataset, name: string, i: number, scale: boolean, dimById: Map<number, string>, notes: string[]): string {

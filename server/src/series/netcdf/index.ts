@@ -1,6 +1,7 @@
 export * from './types';
 export * from './netcdf-import-error';
 export * from './open-netcdf';
+export * from './size-limits';
 export * from './cf-decoder';
 export * from './coordinates';
 export * from './time-axis';

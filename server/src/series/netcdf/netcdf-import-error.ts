@@ -4,6 +4,7 @@ export type NetcdfImportErrorCode =
   | 'truncated'
   | 'corrupt'
   | 'too-large'
+  | 'implausible-size'
   | 'no-such-variable'
   | 'bad-slab'
   | 'unsupported'

@@ -1,4 +1,4 @@
-import { EARTH_RADIUS_GRS80_MEAN_M } from '@upwell/common';
+import { EARTH_RADIUS_GRS80_MEAN_M, weightedSum } from '@upwell/common';
 import { stringAttribute } from './attributes';
 import { createCfDecoder } from './cf-decoder';
 import { findCoordinates } from './coordinates';
@@ -30,8 +30,8 @@ export interface BoxReduction {
 
 /**
  * Area-weighted regional mean or integral of a (time, lat, lon) or (time, depth, lat, lon) field
- * over a box, streamed one time step at a time: memory is one step of the box's rows, weights are
- * computed once, and the inner loop adds without allocating. Missing cells (CF fill, missing or
+ * over a box, streamed one level of one time step at a time: memory is one plane of the box's
+ * rows, weights are computed once, and the engine's `weightedSum` adds each row without allocating. Missing cells (CF fill, missing or
  * out of range) are skipped; the mean renormalises by the weight of the cells present, the
  * integral sums the present cells only (see `coverage`).
  */
@@ -41,45 +41,47 @@ export function reduceBox(file: NetcdfFile, name: string, options: BoxReductionO
   const { coordinates, notes } = findCoordinates(file);
   const layout = resolveGridLayout(file.variable(name), coordinates);
   const monthly = readMonthlyTime(file, layout.time.variable, { allowGaps: options.allowGaps });
-  const w = gridWeights(file, layout, options.box, radius, options.cellMeasures ?? true);
+  const w = gridWeights(file, layout, options.box, radius, options.cellMeasures ?? true, options.maxPlaneCells);
   const decoder = createCfDecoder(layout.variable);
 
-  // Compact list of cells with weight, so the inner loop touches nothing outside the box.
   const plane = w.rowCount * w.nlon;
+  const row = new Float64Array(2);
   let n = 0;
   for (let c = 0; c < plane; c++) if (w.area[c] > 0) n++;
-  const cellIndex = new Int32Array(n);
-  const cellArea = new Float64Array(n);
-  for (let c = 0, m = 0; c < plane; c++) if (w.area[c] > 0) { cellIndex[m] = c; cellArea[m++] = w.area[c]; }
+  // The box's whole weight, summed in the same order as a step with every cell present, so full coverage is exactly 1.
+  const ones = new Float64Array(w.nlon).fill(1);
+  let planeWeight = 0;
+  for (let r = 0; r < w.rowCount; r++) {
+    weightedSum(ones, 0, w.area, r * w.nlon, w.nlon, row);
+    planeWeight += row[1];
+  }
   let totalWeight = 0;
-  for (let k = 0; k < w.levelCount; k++) for (let m = 0; m < n; m++) totalWeight += cellArea[m] * w.thickness[k];
+  for (let k = 0; k < w.levelCount; k++) totalWeight += planeWeight * w.thickness[k];
 
+  // One level of one time step in memory at a time: the bound is the box's plane, whatever the file size.
   const depth = !!layout.depth;
-  const buffer = new Float64Array(w.levelCount * plane);
+  const buffer = new Float64Array(plane);
   const nt = layout.variable.shape[0];
   const values: (number | null)[] = new Array(monthly.axis.length).fill(null);
   const coverage: (number | null)[] = new Array(monthly.axis.length).fill(null);
   for (let t = 0; t < nt; t++) {
-    const slab = depth
-      ? { start: [t, w.levelStart, w.rowStart, 0], count: [1, w.levelCount, w.rowCount, w.nlon] }
-      : { start: [t, w.rowStart, 0], count: [1, w.rowCount, w.nlon] };
-    decoder.decode(file.read(name, slab), buffer);
     let sum = 0;
     let weight = 0;
     for (let k = 0; k < w.levelCount; k++) {
       const dz = w.thickness[k];
       if (dz === 0) continue;
-      const base = k * plane;
-      // A partial sum per level, then across levels: double accumulation of float32 inputs keeps the
-      // relative rounding error near n·2^-53 ≈ 1e-10 for 10^6 cells, far below the data precision.
+      const slab = depth
+        ? { start: [t, w.levelStart + k, w.rowStart, 0], count: [1, 1, w.rowCount, w.nlon] }
+        : { start: [t, w.rowStart, 0], count: [1, w.rowCount, w.nlon] };
+      decoder.decode(file.read(name, slab), buffer);
+      // Row sums, then levels: double accumulation of float32 inputs keeps the relative rounding
+      // error near n·2^-53 ≈ 1e-10 for 10^6 cells, far below the data precision.
       let s = 0;
       let a = 0;
-      for (let m = 0; m < n; m++) {
-        const v = buffer[base + cellIndex[m]];
-        if (v === v) {
-          s += cellArea[m] * v;
-          a += cellArea[m];
-        }
+      for (let r = 0; r < w.rowCount; r++) {
+        weightedSum(buffer, r * w.nlon, w.area, r * w.nlon, w.nlon, row);
+        s += row[0];
+        a += row[1];
       }
       sum += s * dz;
       weight += a * dz;

@@ -28,4 +28,6 @@ export interface ReductionOptions {
   cellMeasures?: boolean;
   /** Fill skipped months with null instead of refusing the time axis. */
   allowGaps?: boolean;
+  /** Most cells of one latitude–longitude plane of the box held at once (default: DEFAULT_NETCDF_LIMITS.maxReadCells). */
+  maxPlaneCells?: number;
 }

@@ -1,4 +1,4 @@
-import { EARTH_RADIUS_GRS80_MEAN_M } from '@upwell/common';
+import { EARTH_RADIUS_GRS80_MEAN_M, weightedSum } from '@upwell/common';
 import { stringAttribute } from './attributes';
 import { createCfDecoder } from './cf-decoder';
 import { findCoordinates } from './coordinates';
@@ -32,7 +32,7 @@ export interface ZonalMeanField {
  * weighted by the area of their part inside the band (for spherical cells, proportional to the
  * longitude overlap; with cell_measures, the file's areas), and by layer thickness when a depth
  * range is averaged. Missing cells are skipped and weights renormalised per row. Streamed one
- * time step at a time, like `reduceBox()`.
+ * level of one time step at a time through the engine's `weightedSum`, like `reduceBox()`.
  */
 export function zonalMeanField(file: NetcdfFile, name: string, options: ZonalMeanOptions): ZonalMeanField {
   const radius = options.radius ?? EARTH_RADIUS_GRS80_MEAN_M;
@@ -40,11 +40,12 @@ export function zonalMeanField(file: NetcdfFile, name: string, options: ZonalMea
   const { coordinates, notes } = findCoordinates(file);
   const layout = resolveGridLayout(file.variable(name), coordinates);
   const monthly = readMonthlyTime(file, layout.time.variable, { allowGaps: options.allowGaps });
-  const w = gridWeights(file, layout, box, radius, options.cellMeasures ?? true);
+  const w = gridWeights(file, layout, box, radius, options.cellMeasures ?? true, options.maxPlaneCells);
   const decoder = createCfDecoder(layout.variable);
   const plane = w.rowCount * w.nlon;
   const depth = !!layout.depth;
-  const buffer = new Float64Array(w.levelCount * plane);
+  const buffer = new Float64Array(plane);
+  const rowSum = new Float64Array(2);
   const sums = new Float64Array(w.rowCount);
   const weights = new Float64Array(w.rowCount);
   const values: (number | null)[][] = Array.from({ length: monthly.axis.length }, () => new Array(w.rowCount).fill(null));
@@ -53,30 +54,19 @@ export function zonalMeanField(file: NetcdfFile, name: string, options: ZonalMea
   for (let c = 0; c < plane; c++) if (w.area[c] > 0) cells++;
 
   for (let t = 0; t < nt; t++) {
-    const slab = depth
-      ? { start: [t, w.levelStart, w.rowStart, 0], count: [1, w.levelCount, w.rowCount, w.nlon] }
-      : { start: [t, w.rowStart, 0], count: [1, w.rowCount, w.nlon] };
-    decoder.decode(file.read(name, slab), buffer);
     sums.fill(0);
     weights.fill(0);
     for (let k = 0; k < w.levelCount; k++) {
       const dz = w.thickness[k];
       if (dz === 0) continue;
-      const base = k * plane;
+      const slab = depth
+        ? { start: [t, w.levelStart + k, w.rowStart, 0], count: [1, 1, w.rowCount, w.nlon] }
+        : { start: [t, w.rowStart, 0], count: [1, w.rowCount, w.nlon] };
+      decoder.decode(file.read(name, slab), buffer);
       for (let r = 0; r < w.rowCount; r++) {
-        const row = r * w.nlon;
-        let s = 0;
-        let a = 0;
-        for (let i = 0; i < w.nlon; i++) {
-          const area = w.area[row + i];
-          const v = buffer[base + row + i];
-          if (area > 0 && v === v) {
-            s += area * v;
-            a += area;
-          }
-        }
-        sums[r] += s * dz;
-        weights[r] += a * dz;
+        weightedSum(buffer, r * w.nlon, w.area, r * w.nlon, w.nlon, rowSum);
+        sums[r] += rowSum[0] * dz;
+        weights[r] += rowSum[1] * dz;
       }
     }
     const out = values[monthly.axis.slotOfStep[t]];
