@@ -66,7 +66,7 @@ describe('route walk over the OpenAPI document', () => {
     const users = await Promise.all(ACTORS.map((a) => buildUser(t.url, a)));
     p = Object.fromEntries(ACTORS.map((a, i) => [a, users[i]])) as unknown as People;
     await buildGroup(t.url, p.outsider, [], 'Walk group B');
-    shared = await buildWorld(t.url, p);
+    shared = await buildWorld(t.url, p, t.dataDir);
     secret = readFileSync(join(t.dataDir, 'secrets', 'jwt-secret'), 'utf8').trim();
     const doc = (await request(t.url).get('/api/docs/openapi.json').expect(200)).body as {
       paths: Record<string, Record<string, { requestBody?: { content: Record<string, { schema: { required?: string[] } }> } }>>;
@@ -156,7 +156,7 @@ describe('route walk over the OpenAPI document', () => {
         const want = expected(r, actor);
         if (want === null) continue;
         // A step that may change group A gets a world of its own; refusals and reads share one.
-        const w = want === 'ok' && r.method !== 'GET' ? await buildWorld(t.url, p) : shared;
+        const w = want === 'ok' && r.method !== 'GET' ? await buildWorld(t.url, p, t.dataDir) : shared;
         const res = await send(r, w, { auth: p[actor].auth, what: actor });
         checked++;
         const ok = want === 'ok' ? res.status >= 200 && res.status < 300 : res.status === want;
@@ -185,7 +185,7 @@ describe('route walk over the OpenAPI document', () => {
     let w: World;
     let caller: TestUser;
     beforeAll(async () => {
-      w = await buildWorld(t.url, p);
+      w = await buildWorld(t.url, p, t.dataDir);
       caller = p.lead;
     }, 60_000);
 

@@ -23,7 +23,7 @@ export interface AppConfig {
   appOrigin: string;
   /** Redis for socket fan-out across several server processes, or null for one process alone. */
   redisUrl: string | null;
-  /** Outgoing SMTP server, or null to start the in-process mail catcher instead. */
+  /** Outgoing SMTP server, or null to start the in-process local mailbox instead. */
   smtpUrl: string | null;
   /** Sender of every mail Upwell sends. */
   mailFrom: string;

@@ -1,11 +1,11 @@
 import { Global, Module } from '@nestjs/common';
-import { MailCatcher } from './mail-catcher';
+import { LocalMailbox } from './local-mailbox';
 import { MailController } from './mail.controller';
 import { MailNotifier } from './mail-notifier';
 import { MailSender } from './mail-sender';
 import { MailService } from './mail.service';
 
-/** Sending mail (SMTP_URL or the local catcher), notification mail, and the local outbox. */
+/** Sending mail (SMTP_URL or the local mailbox), notification mail, and the local outbox. */
 @Global()
-@Module({ controllers: [MailController], providers: [MailCatcher, MailSender, MailNotifier, MailService], exports: [MailSender] })
+@Module({ controllers: [MailController], providers: [LocalMailbox, MailSender, MailNotifier, MailService], exports: [MailSender] })
 export class MailModule {}
