@@ -5,6 +5,8 @@ import { join, resolve } from 'node:path';
 /** Settings the server runs with, read once from the environment at start. */
 export interface AppConfig {
   port: number;
+  /** Address to listen on (HOST): loopback by default, so a fresh server is reachable from this machine only. */
+  host: string;
   /** Folder for the SQLite file, uploads and generated secrets. */
   dataDir: string;
   databaseFile: string;
@@ -17,8 +19,13 @@ export interface AppConfig {
   authAttemptsPerMinute: number;
   /** Largest upload accepted, in bytes (streamed to disk, never held in memory). */
   uploadMaxBytes: number;
-  /** Seed the demo group, people, series and notebooks on start (SEED_DEMO, on unless "false"). */
+  /**
+   * Seed the demo group, people, series and notebooks on start: SEED_DEMO "true"
+   * (the default) on a loopback bind, "force" on any bind, "false" never.
+   */
   seedDemo: boolean;
+  /** The demo seed was asked for but refused because HOST is not a loopback address (the start-up log says so). */
+  seedDemoRefused: boolean;
   /** The one foreign origin browsers may call the API and socket from (CORS); the app's own address by default. */
   appOrigin: string;
   /** Redis for socket fan-out across several server processes, or null for one process alone. */
@@ -98,10 +105,21 @@ export function withoutPassword(raw: string): string {
   }
 }
 
-function seedDemo(raw: string | undefined): boolean {
-  if (raw === undefined || raw === '' || raw === 'true') return true;
-  if (raw === 'false') return false;
-  throw new Error(`SEED_DEMO must be "true" or "false", got "${raw}"`);
+/** Whether an address to listen on is reachable from this machine only (127.0.0.0/8, ::1, localhost). */
+export function isLoopbackHost(host: string): boolean {
+  return host === 'localhost' || host === '::1' || /^127(\.\d{1,3}){3}$/.test(host);
+}
+
+/**
+ * The demo's passwords are public (README, GET /api/demo), so the seed runs on a
+ * loopback bind only unless SEED_DEMO=force says the person means it.
+ */
+function seedDemo(raw: string | undefined, host: string): { seedDemo: boolean; seedDemoRefused: boolean } {
+  if (raw === 'false') return { seedDemo: false, seedDemoRefused: false };
+  if (raw === 'force') return { seedDemo: true, seedDemoRefused: false };
+  if (raw !== undefined && raw !== '' && raw !== 'true') throw new Error(`SEED_DEMO must be "true", "false" or "force", got "${raw}"`);
+  const loopback = isLoopbackHost(host);
+  return { seedDemo: loopback, seedDemoRefused: !loopback };
 }
 
 /** APP_ORIGIN as a browser sends it (scheme://host[:port], no path), or the fallback. */
@@ -139,8 +157,10 @@ export function loadAppConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
   const defaultWeb = resolve(__dirname, '../../../web/dist');
   const webDist = env.WEB_DIST === '' ? null : resolve(env.WEB_DIST || defaultWeb);
   const port = positiveInt('PORT', env.PORT, 3000);
+  const host = env.HOST || '127.0.0.1';
   return {
     port,
+    host,
     dataDir,
     databaseFile: join(dataDir, 'upwell.sqlite'),
     jwtSecret: jwtSecret(dataDir, env.JWT_SECRET),
@@ -148,7 +168,7 @@ export function loadAppConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     webDist: webDist && existsSync(join(webDist, 'index.html')) ? webDist : null,
     authAttemptsPerMinute: positiveInt('AUTH_ATTEMPTS_PER_MINUTE', env.AUTH_ATTEMPTS_PER_MINUTE, 20),
     uploadMaxBytes: positiveInt('UPLOAD_MAX_BYTES', env.UPLOAD_MAX_BYTES, 2 * 1024 ** 3),
-    seedDemo: seedDemo(env.SEED_DEMO),
+    ...seedDemo(env.SEED_DEMO, host),
     appOrigin: origin(env.APP_ORIGIN, `http://localhost:${port}`),
     redisUrl: redisUrl(env.REDIS_URL),
     ...mailConfig(env),

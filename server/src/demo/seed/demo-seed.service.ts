@@ -11,7 +11,7 @@ import { DEMO_GROUP_NAME, DEMO_PEOPLE, demoBanner } from '../demo-people';
 import { seedDemoContent, type DemoCast } from './demo-content';
 
 /**
- * Seeds the demo once, at start, when SEED_DEMO is not "false" and the
+ * Seeds the demo once, at start, when the config allows it (SEED_DEMO, loopback HOST) and the
  * database has no demo group yet; later starts only print the sign-in
  * details. A seed that fails is logged and leaves the server running.
  */
@@ -31,6 +31,11 @@ export class DemoSeed implements OnApplicationBootstrap {
   }
 
   async onApplicationBootstrap(): Promise<void> {
+    if (this.config.seedDemoRefused) {
+      this.logger.warn(
+        `not seeding the demo: its passwords are public and HOST=${this.config.host} is not a loopback address; SEED_DEMO=force seeds it anyway, SEED_DEMO=false silences this`,
+      );
+    }
     if (!this.config.seedDemo) return;
     try {
       await RequestContext.create(this.orm.em, () => this.run());
