@@ -200,6 +200,16 @@ describe('route walk over the OpenAPI document', () => {
       if (v && typeof v === 'object' && !Array.isArray(v)) return Object.entries(v).flatMap(([k, x]) => leaves(x, [...at, k]));
       return [{ path: at, value: v }];
     }
+    /**
+     * Paths of every text field of a valid body: strings in objects and in the first item of each list, at any depth;
+     * not inside a notebook file's `document` (ProseMirror JSON, checked node by node against the editor schema).
+     */
+    function textLeaves(v: unknown, at: string[] = []): string[][] {
+      if (typeof v === 'string') return [at];
+      if (Array.isArray(v)) return v.length ? textLeaves(v[0], [...at, '0']) : [];
+      if (v && typeof v === 'object') return Object.entries(v).flatMap(([k, x]) => (k === 'document' ? [] : textLeaves(x, [...at, k])));
+      return [];
+    }
     function withLeaf(body: unknown, path: string[], value: unknown): unknown {
       const copy = structuredClone(body) as Record<string, unknown>;
       let o = copy;
@@ -252,6 +262,30 @@ describe('route walk over the OpenAPI document', () => {
       }
       expect(wrong, wrong.join('\n')).toEqual([]);
     }, 600_000);
+
+    // Issue 23 item 5: a NUL in a stored text gave a 500 on 16 routes. One rule in the contracts (common/src/api/text.ts) refuses them.
+    it('refuses a NUL (U+0000) and an escape (U+001B) in every text field of every body with 400, never 500', async () => {
+      const wrong: string[] = [];
+      let checked = 0;
+      const bodyRoutes = routes.filter((r) => r.jsonBody && r.rule.body);
+      for (const r of bodyRoutes) {
+        const auth = r.rule.scope === 'public' ? undefined : caller.auth;
+        const valid = r.rule.body!(w, p);
+        for (const path of textLeaves(valid)) {
+          const value = path.reduce<unknown>((o, k) => (o as Record<string, unknown>)[k], valid) as string;
+          for (const [label, c] of [['NUL', '\u0000'], ['ESC', '\u001b']]) {
+            // Inside the text, so trimming cannot remove it.
+            const bad = value.length > 1 ? `${value.slice(0, 1)}${c}${value.slice(1)}` : `x${c}x`;
+            const res = await send(r, w, { auth, body: withLeaf(valid, path, bad), what: `${path.join('.')} with ${label}` });
+            checked++;
+            if (res.status !== 400) wrong.push(`${r.key} ${path.join('.')} with ${label}: expected 400, got ${res.status} ${JSON.stringify(res.body).slice(0, 160)}`);
+            else if (typeof res.body?.message !== 'string') wrong.push(`${r.key} ${path.join('.')} with ${label}: 400 without a JSON message`);
+          }
+        }
+      }
+      expect(wrong, wrong.join('\n')).toEqual([]);
+      expect(checked).toBeGreaterThan(60);
+    }, 300_000);
   });
 
   it('never answered 500 anywhere in the walk', () => {

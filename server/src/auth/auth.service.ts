@@ -1,4 +1,4 @@
-import { EntityManager } from '@mikro-orm/sqlite';
+import { EntityManager, UniqueConstraintViolationException } from '@mikro-orm/sqlite';
 import { ConflictException, Injectable, UnauthorizedException } from '@nestjs/common';
 import { JwtService } from '@nestjs/jwt';
 import type { AuthResponse, LoginRequest, RegisterRequest } from '@upwell/common';
@@ -6,6 +6,8 @@ import { User } from '../users/user.entity';
 import { presentUser } from '../users/user.presenter';
 import { hashPassword, verifyAgainstDummy, verifyPassword } from './password';
 import type { TokenPayload } from './token-payload';
+
+const ALREADY_EXISTS = 'an account with this e-mail already exists; sign in instead';
 
 /** Sign-up, sign-in, sign-out and token checks. */
 @Injectable()
@@ -17,10 +19,17 @@ export class AuthService {
 
   async register(body: RegisterRequest): Promise<AuthResponse> {
     if (await this.em.count(User, { email: body.email })) {
-      throw new ConflictException('an account with this e-mail already exists; sign in instead');
+      throw new ConflictException(ALREADY_EXISTS);
     }
     const user = this.em.create(User, { email: body.email, name: body.name, passwordHash: await hashPassword(body.password) });
-    await this.em.flush();
+    try {
+      await this.em.flush();
+    } catch (err) {
+      // Two sign-ups for one address at once both pass the check above; the unique index decides, and the loser hears the same 409.
+      if (!(err instanceof UniqueConstraintViolationException)) throw err;
+      this.em.clear();
+      throw new ConflictException(ALREADY_EXISTS);
+    }
     return this.issue(user);
   }
 

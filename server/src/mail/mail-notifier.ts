@@ -2,6 +2,7 @@ import { EntityManager } from '@mikro-orm/sqlite';
 import { Inject, Injectable, Logger } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { OnEvent } from '@nestjs/event-emitter';
+import { loggableError } from '../common/loggable-error';
 import { APP_CONFIG, type AppConfig } from '../config/app-config';
 import { Notebook, NotebookRoleAssignment } from '../notebooks/notebook.entity';
 import { Notification } from '../notifications/notification.entity';
@@ -48,7 +49,7 @@ export class MailNotifier {
       // One mail per person: nobody learns the others' addresses.
       for (const r of roles) await this.sender.send({ ...content, to: r.user.email, groupId: notebook.group.id });
     } catch (err) {
-      this.logger.error(`snapshot mail for ${e.snapshotId} failed: ${err instanceof Error ? err.message : String(err)}`);
+      this.logger.error(`snapshot mail for ${e.snapshotId} failed: ${loggableError(err)}`);
     }
   }
 
@@ -69,7 +70,7 @@ export class MailNotifier {
         await this.sender.send({ ...content, to: n.recipient.email, groupId: n.notebook.group.id });
       }
     } catch (err) {
-      this.logger.error(`mention mail failed: ${err instanceof Error ? err.message : String(err)}`);
+      this.logger.error(`mention mail failed: ${loggableError(err)}`);
     }
   }
 

@@ -4,6 +4,7 @@ import { ConfigService } from '@nestjs/config';
 import { ModuleRef } from '@nestjs/core';
 import type { DemoInfo } from '@upwell/common';
 import { AuthService } from '../../auth/auth.service';
+import { loggableError } from '../../common/loggable-error';
 import { APP_CONFIG, type AppConfig } from '../../config/app-config';
 import { Group, GroupMembership } from '../../groups/group.entity';
 import { User } from '../../users/user.entity';
@@ -41,7 +42,7 @@ export class DemoSeed implements OnApplicationBootstrap {
       await RequestContext.create(this.orm.em, () => this.run());
       process.stdout.write(`\n${demoBanner()}\n\n`);
     } catch (err) {
-      this.logger.error(`the demo seed failed: ${err instanceof Error ? (err.stack ?? err.message) : String(err)}`);
+      this.logger.error(`the demo seed failed: ${loggableError(err)}`);
     }
   }
 
