@@ -40,6 +40,10 @@ export interface AppConfig {
   invitationTtlHours: number;
   /** Invitations one person may send per hour. */
   invitationsPerHour: number;
+  /** Quiet spell after a person's last mention before their mention mail goes (one mail for all of them). */
+  mentionMailQuietMs: number;
+  /** Longest a mention waits for its mail while mentions keep coming. */
+  mentionMailMaxWaitMs: number;
 }
 
 /** Name under which the config is registered with @nestjs/config. */
@@ -147,6 +151,8 @@ function mailConfig(env: NodeJS.ProcessEnv) {
     appUrl,
     invitationTtlHours: ttl,
     invitationsPerHour: positiveInt('INVITATIONS_PER_HOUR', env.INVITATIONS_PER_HOUR, 30),
+    mentionMailQuietMs: positiveInt('MENTION_MAIL_QUIET_MS', env.MENTION_MAIL_QUIET_MS, 60_000),
+    mentionMailMaxWaitMs: positiveInt('MENTION_MAIL_MAX_WAIT_MS', env.MENTION_MAIL_MAX_WAIT_MS, 15 * 60_000),
   };
 }
 

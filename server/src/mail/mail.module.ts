@@ -3,9 +3,10 @@ import { LocalMailbox } from './local-mailbox';
 import { MailController } from './mail.controller';
 import { MailNotifier } from './mail-notifier';
 import { MailSender } from './mail-sender';
+import { MentionDigest } from './mention-digest';
 import { MailService } from './mail.service';
 
 /** Sending mail (SMTP_URL or the local mailbox), notification mail, and the local outbox. */
 @Global()
-@Module({ controllers: [MailController], providers: [LocalMailbox, MailSender, MailNotifier, MailService], exports: [MailSender] })
+@Module({ controllers: [MailController], providers: [LocalMailbox, MailSender, MailNotifier, MentionDigest, MailService], exports: [MailSender] })
 export class MailModule {}
