@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import type { MailOutbox } from '@upwell/common';
+import { readdirSync, readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import type { CapturedMail, MailOutbox } from '@upwell/common';
 import { apiAs, signInContext, signUp } from './support/api';
 import { screenshot, watchErrors } from './support/browser';
 import { useServerAndBrowser } from './support/harness';
@@ -20,12 +22,18 @@ describe('inviting a colleague by e-mail in Chromium', () => {
     await page.getByRole('status').filter({ hasText: 'Invitation sent to new.colleague@example.org' }).waitFor();
     await page.getByRole('button', { name: 'Revoke the invitation to new.colleague@example.org' }).waitFor();
 
-    // The shell offers the outbox to a group admin while the local catcher is in use.
+    // The shell offers the outbox to a group admin while the local mailbox is in use.
     await page.getByRole('link', { name: 'Mail outbox' }).click();
     await page.getByRole('article').first().waitFor();
+    await page.getByText('link hidden: only the addressee sees it').first().waitFor();
     const box = await apiAs<MailOutbox>(h.server.url, admin.token, '/mail/outbox');
-    const mail = box.messages.find((m) => m.to.includes('new.colleague@example.org'));
-    const link = /https?:\/\/\S+\/invitations\/[A-Za-z0-9_-]{43}/.exec(mail?.text ?? '')?.[0];
+    expect(box.messages.find((m) => m.to.includes('new.colleague@example.org'))?.text).toContain('link hidden');
+    // The admin sees that the mail went, never its link: the colleague's copy is the stored mail (DATA_DIR/mail).
+    const stored = readdirSync(join(h.server.dataDir, 'mail'))
+      .filter((f) => f.endsWith('.json'))
+      .map((f) => JSON.parse(readFileSync(join(h.server.dataDir, 'mail', f), 'utf8')) as CapturedMail)
+      .find((m) => m.to.includes('new.colleague@example.org'));
+    const link = /https?:\/\/\S+\/invitations\/[A-Za-z0-9_-]{43}/.exec(stored?.text ?? '')?.[0];
     expect(link).toBeDefined();
 
     const fresh = await h.browser.newContext({ viewport: { width: 1280, height: 860 } });

@@ -2,7 +2,8 @@ import { defineConfig } from 'vite';
 import react from '@vitejs/plugin-react';
 import { fileURLToPath } from 'node:url';
 
-const apiTarget = `http://localhost:${process.env.PORT || 3000}`;
+// The server listens on 127.0.0.1 by default (HOST); name it, so "localhost" resolving to ::1 first cannot miss it.
+const apiTarget = `http://127.0.0.1:${process.env.PORT || 3000}`;
 
 export default defineConfig({
   plugins: [react()],

@@ -5,7 +5,7 @@ import helmet from 'helmet';
 import { AppModule } from './app.module';
 import { installJsonBodyParser } from './common/body-parser';
 import { AllExceptionsFilter } from './common/all-exceptions.filter';
-import { loadAppConfig, type AppConfig } from './config/app-config';
+import { isLoopbackHost, loadAppConfig, type AppConfig } from './config/app-config';
 import { RedisIoAdapter } from './realtime/redis-io.adapter';
 
 /** A configured Upwell app, not yet listening. */
@@ -68,12 +68,13 @@ export async function buildApp(env: NodeJS.ProcessEnv = process.env, opts: { log
   return { app, config };
 }
 
-/** Starts the server on the configured port (0 picks a free one) and says where. */
+/** Starts the server on the configured host and port (0 picks a free one) and says where. */
 export async function startApp(env: NodeJS.ProcessEnv = process.env): Promise<BuiltApp & { url: string }> {
   const built = await buildApp(env);
-  await built.app.listen(built.config.port, '0.0.0.0');
+  await built.app.listen(built.config.port, built.config.host);
   const address = built.app.getHttpServer().address() as { port: number };
   const url = `http://localhost:${address.port}`;
-  new Logger('Upwell').log(`serving ${built.config.webDist ? 'the app and ' : ''}the API at ${url} (data in ${built.config.dataDir})`);
+  const reach = isLoopbackHost(built.config.host) ? 'from this machine only' : `on ${built.config.host}`;
+  new Logger('Upwell').log(`serving ${built.config.webDist ? 'the app and ' : ''}the API at ${url}, ${reach} (data in ${built.config.dataDir})`);
   return { ...built, url };
 }

@@ -1,4 +1,4 @@
-import { defineConfig, type Options } from '@mikro-orm/sqlite';
+import { DefaultLogger, defineConfig, type LogContext, type LoggerNamespace, type LoggerOptions, type Options } from '@mikro-orm/sqlite';
 import { Migrator } from '@mikro-orm/migrations';
 import { join, resolve } from 'node:path';
 import { User } from './users/user.entity';
@@ -23,6 +23,21 @@ export const ENTITIES = [User, Group, GroupMembership, Notebook, NotebookRoleAss
   // E-mail invitations
   Invitation];
 
+/**
+ * MikroORM's logger with parameter logging locked off: should query logging
+ * ever be turned on (`debug`), statements show `?` placeholders, never the
+ * values (e-mails, password hashes) that MikroORM otherwise inlines.
+ */
+export class LoggerWithoutParams extends DefaultLogger {
+  constructor(options: LoggerOptions) {
+    super(options);
+  }
+
+  override isEnabled(namespace: LoggerNamespace, context?: LogContext): boolean {
+    return namespace !== 'query-params' && super.isEnabled(namespace, context);
+  }
+}
+
 /** MikroORM options for the SQLite file at `databaseFile`. */
 export function buildOrmOptions(databaseFile: string): Options {
   return defineConfig({
@@ -45,6 +60,7 @@ export function buildOrmOptions(databaseFile: string): Options {
       },
     },
     debug: false,
+    loggerFactory: (options) => new LoggerWithoutParams(options),
   });
 }
 

@@ -8,7 +8,7 @@ import { capturedMail, invitationToken, mailTo } from './mail-inbox';
 let n = 0;
 const freshEmail = () => `invitee${++n}.${process.pid}@example.org`;
 
-describe('invitations by e-mail, end to end through the local mail catcher', () => {
+describe('invitations by e-mail, end to end through the local mailbox', () => {
   let t: TestApp;
   let admin: TestUser, member: TestUser, coauthor: TestUser;
   let group: GroupDetail;
@@ -28,7 +28,7 @@ describe('invitations by e-mail, end to end through the local mail catcher', () 
   });
   afterAll(() => t.close());
 
-  it('invite → the catcher receives the mail over SMTP → the link signs a new person up → they hold the group role', async () => {
+  it('invite → the local mailbox receives the mail over SMTP → the link signs a new person up → they hold the group role', async () => {
     const email = freshEmail();
     const created = (await inviteToGroup(admin, email, 'member').expect(201)).body as CreatedInvitationView;
     expect(created).toMatchObject({ kind: 'group', groupId: group.id, notebookId: null, email, role: 'member', mailSent: true, mailError: null });
@@ -220,13 +220,13 @@ describe('invitation limits and a configured SMTP server', () => {
     }
   });
 
-  it('with SMTP_URL set there is no catcher: the outbox is 404 and a failed send keeps the invitation with mailSent false', async () => {
+  it('with SMTP_URL set there is no local mailbox: the outbox is 404 and a failed send keeps the invitation with mailSent false', async () => {
     // Port 9 (discard) on loopback has no SMTP server listening here, so the connection is refused.
     const t = await startTestApp({ SMTP_URL: 'smtp://127.0.0.1:9' });
     try {
       const a = await buildUser(t.url);
       const g = await buildGroup(t.url, a);
-      expect((await request(t.url).get('/api/mail/outbox').set(a.auth).expect(404)).body.message).toMatch(/no local mail catcher in use/);
+      expect((await request(t.url).get('/api/mail/outbox').set(a.auth).expect(404)).body.message).toMatch(/no local mailbox in use/);
       expect((await request(t.url).get('/api/mail/status').set(a.auth).expect(200)).body).toEqual({ fake: false });
       const res = (await request(t.url).post(`/api/groups/${g.id}/invitations`).set(a.auth).send({ email: freshEmail(), role: 'member' }).expect(201)).body as CreatedInvitationView;
       expect(res.mailSent).toBe(false);

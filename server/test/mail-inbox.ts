@@ -2,7 +2,7 @@ import { readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { CapturedMail } from '@upwell/common';
 
-/** Every message the app's local mail catcher has stored in DATA_DIR/mail so far. */
+/** Every message the app's local mailbox has stored in DATA_DIR/mail so far. */
 export function capturedMail(dataDir: string): CapturedMail[] {
   let names: string[] = [];
   try {

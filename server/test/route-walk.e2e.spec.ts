@@ -66,7 +66,7 @@ describe('route walk over the OpenAPI document', () => {
     const users = await Promise.all(ACTORS.map((a) => buildUser(t.url, a)));
     p = Object.fromEntries(ACTORS.map((a, i) => [a, users[i]])) as unknown as People;
     await buildGroup(t.url, p.outsider, [], 'Walk group B');
-    shared = await buildWorld(t.url, p);
+    shared = await buildWorld(t.url, p, t.dataDir);
     secret = readFileSync(join(t.dataDir, 'secrets', 'jwt-secret'), 'utf8').trim();
     const doc = (await request(t.url).get('/api/docs/openapi.json').expect(200)).body as {
       paths: Record<string, Record<string, { requestBody?: { content: Record<string, { schema: { required?: string[] } }> } }>>;
@@ -156,7 +156,7 @@ describe('route walk over the OpenAPI document', () => {
         const want = expected(r, actor);
         if (want === null) continue;
         // A step that may change group A gets a world of its own; refusals and reads share one.
-        const w = want === 'ok' && r.method !== 'GET' ? await buildWorld(t.url, p) : shared;
+        const w = want === 'ok' && r.method !== 'GET' ? await buildWorld(t.url, p, t.dataDir) : shared;
         const res = await send(r, w, { auth: p[actor].auth, what: actor });
         checked++;
         const ok = want === 'ok' ? res.status >= 200 && res.status < 300 : res.status === want;
@@ -185,7 +185,7 @@ describe('route walk over the OpenAPI document', () => {
     let w: World;
     let caller: TestUser;
     beforeAll(async () => {
-      w = await buildWorld(t.url, p);
+      w = await buildWorld(t.url, p, t.dataDir);
       caller = p.lead;
     }, 60_000);
 
@@ -199,6 +199,16 @@ describe('route walk over the OpenAPI document', () => {
     function leaves(v: unknown, at: string[] = []): { path: string[]; value: unknown }[] {
       if (v && typeof v === 'object' && !Array.isArray(v)) return Object.entries(v).flatMap(([k, x]) => leaves(x, [...at, k]));
       return [{ path: at, value: v }];
+    }
+    /**
+     * Paths of every text field of a valid body: strings in objects and in the first item of each list, at any depth;
+     * not inside a notebook file's `document` (ProseMirror JSON, checked node by node against the editor schema).
+     */
+    function textLeaves(v: unknown, at: string[] = []): string[][] {
+      if (typeof v === 'string') return [at];
+      if (Array.isArray(v)) return v.length ? textLeaves(v[0], [...at, '0']) : [];
+      if (v && typeof v === 'object') return Object.entries(v).flatMap(([k, x]) => (k === 'document' ? [] : textLeaves(x, [...at, k])));
+      return [];
     }
     function withLeaf(body: unknown, path: string[], value: unknown): unknown {
       const copy = structuredClone(body) as Record<string, unknown>;
@@ -252,6 +262,30 @@ describe('route walk over the OpenAPI document', () => {
       }
       expect(wrong, wrong.join('\n')).toEqual([]);
     }, 600_000);
+
+    // Issue 23 item 5: a NUL in a stored text gave a 500 on 16 routes. One rule in the contracts (common/src/api/text.ts) refuses them.
+    it('refuses a NUL (U+0000) and an escape (U+001B) in every text field of every body with 400, never 500', async () => {
+      const wrong: string[] = [];
+      let checked = 0;
+      const bodyRoutes = routes.filter((r) => r.jsonBody && r.rule.body);
+      for (const r of bodyRoutes) {
+        const auth = r.rule.scope === 'public' ? undefined : caller.auth;
+        const valid = r.rule.body!(w, p);
+        for (const path of textLeaves(valid)) {
+          const value = path.reduce<unknown>((o, k) => (o as Record<string, unknown>)[k], valid) as string;
+          for (const [label, c] of [['NUL', '\u0000'], ['ESC', '\u001b']]) {
+            // Inside the text, so trimming cannot remove it.
+            const bad = value.length > 1 ? `${value.slice(0, 1)}${c}${value.slice(1)}` : `x${c}x`;
+            const res = await send(r, w, { auth, body: withLeaf(valid, path, bad), what: `${path.join('.')} with ${label}` });
+            checked++;
+            if (res.status !== 400) wrong.push(`${r.key} ${path.join('.')} with ${label}: expected 400, got ${res.status} ${JSON.stringify(res.body).slice(0, 160)}`);
+            else if (typeof res.body?.message !== 'string') wrong.push(`${r.key} ${path.join('.')} with ${label}: 400 without a JSON message`);
+          }
+        }
+      }
+      expect(wrong, wrong.join('\n')).toEqual([]);
+      expect(checked).toBeGreaterThan(60);
+    }, 300_000);
   });
 
   it('never answered 500 anywhere in the walk', () => {

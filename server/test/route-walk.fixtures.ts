@@ -4,6 +4,7 @@ import * as Y from 'yjs';
 import { DOCUMENT_FIELD, type GroupAction, type NotebookAction } from '@upwell/common';
 import { buildGroup, buildNotebook, type TestUser } from './factories';
 import { fixture } from './fixtures/netcdf/fixture-path';
+import { invitationToken, mailTo } from './mail-inbox';
 
 /**
  * The one place the route walk (route-walk.e2e.spec.ts) learns about routes.
@@ -239,7 +240,7 @@ export function indexCsv(): Buffer {
 }
 
 /** Builds group A's things (a fresh group, notebook, series, upload, fields, event set, checkpoint, comments, notification). */
-export async function buildWorld(url: string, p: People): Promise<World> {
+export async function buildWorld(url: string, p: People, dataDir: string): Promise<World> {
   const group = await buildGroup(url, p.lead, [p.coauthor, p.reviewer, p.reader, p.member, p.spare], 'Walk group A');
   const nb = await buildNotebook(url, group.id, p.lead, [[p.coauthor, 'co-author'], [p.reviewer, 'reviewer'], [p.reader, 'reader'], [p.spare, 'reader']]);
   const api = request(url);
@@ -265,6 +266,8 @@ export async function buildWorld(url: string, p: People): Promise<World> {
   const groupInvitationId = (await api.post(`/api/groups/${group.id}/invitations`).set(p.lead.auth).send({ email: invitee, role: 'member' }).expect(201)).body.id as string;
   const notebookInvitationId = (await api.post(`${nbPath}/invitations`).set(p.lead.auth).send({ email: freshEmail(), role: 'reader' }).expect(201)).body.id as string;
   const mail = await invitationMail(url, p.lead, invitee);
+  // The outbox hides the link from the admin (it is the invitee's credential); the walk takes it from the stored mail.
+  const stored = await mailTo(dataDir, invitee);
   return {
     groupId: group.id,
     notebookId: nb.id,
@@ -284,12 +287,12 @@ export async function buildWorld(url: string, p: People): Promise<World> {
     notebookFile,
     groupInvitationId,
     notebookInvitationId,
-    invitationToken: /\/invitations\/([A-Za-z0-9_-]{43})\b/.exec(mail.text)![1],
+    invitationToken: invitationToken(stored.text),
     messageId: mail.id,
   };
 }
 
-/** The invitation mail to `to` as the admin reads it in the local mail catcher's outbox (it arrives asynchronously). */
+/** The invitation mail to `to` as the admin reads it in the local mailbox's outbox (it arrives asynchronously). */
 async function invitationMail(url: string, admin: TestUser, to: string): Promise<{ id: string; text: string }> {
   for (let i = 0; i < 200; i++) {
     const box = (await request(url).get('/api/mail/outbox').set(admin.auth).expect(200)).body as { messages: { id: string; to: string[] | string; text: string }[] };

@@ -6,6 +6,7 @@
  * (unreadable or incompatible units), which the server should answer with 422 and the message.
  */
 import { z } from 'zod';
+import { plainText } from './text';
 import { composite } from '../events/composite';
 import { detectEvents } from '../events/detect-events';
 import { anomaly } from '../series/anomaly';
@@ -196,7 +197,7 @@ export function runTrend(body: TrendRequest): TrendResponse {
 export const budgetRequestSchema = z.object({
   tendency: monthlySeriesSchema,
   terms: z
-    .record(z.string().min(1).max(64), monthlySeriesSchema)
+    .record(plainText({ what: 'a term name' }).min(1).max(64), monthlySeriesSchema)
     .refine((t) => Object.keys(t).length >= 1, 'a budget needs at least one term')
     .refine((t) => Object.keys(t).length <= MAX_BUDGET_TERMS, `a budget has at most ${MAX_BUDGET_TERMS} terms`),
 });
@@ -219,7 +220,7 @@ export function runBudget(body: BudgetRequest): BudgetResponse {
 // ── integrate ────────────────────────────────────────────────────────────────────────────
 /** Body of POST /api/analysis/integrate. */
 export const integrateRequestSchema = z
-  .object({ series: monthlySeriesSchema, units: z.string().min(1).max(64), from: yearMonthSchema, to: yearMonthSchema })
+  .object({ series: monthlySeriesSchema, units: plainText({ what: 'units' }).min(1).max(64), from: yearMonthSchema, to: yearMonthSchema })
   .refine((b) => b.from <= b.to, { message: 'from must not be after to', path: ['to'] });
 /** Response of POST /api/analysis/integrate. */
 export const integrateResponseSchema = z.object({ total: z.number(), units: z.string() });

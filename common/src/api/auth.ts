@@ -1,9 +1,9 @@
 import { z } from 'zod';
+import { plainText } from './text';
 import { LIMITS } from './limits';
 import { GROUP_ACTIONS, GROUP_ROLES } from '../roles';
 
-const email = z
-  .string({ error: 'e-mail is required' })
+const email = plainText({ what: 'e-mail', error: 'e-mail is required' })
   .trim()
   .toLowerCase()
   .max(LIMITS.emailMax, `e-mail must be at most ${LIMITS.emailMax} characters`)
@@ -11,14 +11,12 @@ const email = z
 
 /** Body of POST /api/auth/register. */
 export const registerRequestSchema = z.strictObject({
-  name: z
-    .string({ error: 'name is required' })
+  name: plainText({ what: 'name', error: 'name is required' })
     .trim()
     .min(1, 'name must not be empty')
     .max(LIMITS.nameMax, `name must be at most ${LIMITS.nameMax} characters`),
   email,
-  password: z
-    .string({ error: 'password is required' })
+  password: plainText({ what: 'password', error: 'password is required' })
     .min(LIMITS.passwordMin, `password must be at least ${LIMITS.passwordMin} characters`)
     .max(LIMITS.passwordMax, `password must be at most ${LIMITS.passwordMax} characters`),
 });
@@ -27,7 +25,7 @@ export type RegisterRequest = z.infer<typeof registerRequestSchema>;
 /** Body of POST /api/auth/login. */
 export const loginRequestSchema = z.strictObject({
   email,
-  password: z.string({ error: 'password is required' }).min(1, 'password is required').max(LIMITS.passwordMax),
+  password: plainText({ what: 'password', error: 'password is required' }).min(1, 'password is required').max(LIMITS.passwordMax),
 });
 export type LoginRequest = z.infer<typeof loginRequestSchema>;
 

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { plainText } from './text';
 import { userSchema } from './auth';
 
 /** Longest checkpoint name, shared by the form and the server. */
@@ -6,8 +7,7 @@ export const CHECKPOINT_NAME_MAX = 120;
 
 /** Body of POST /api/notebooks/:notebookId/checkpoints: a name for the document as it stands now. */
 export const createCheckpointRequestSchema = z.strictObject({
-  name: z
-    .string({ error: 'name is required' })
+  name: plainText({ what: 'name', error: 'name is required' })
     .trim()
     .min(1, 'name must not be empty')
     .max(CHECKPOINT_NAME_MAX, `name must be at most ${CHECKPOINT_NAME_MAX} characters`),

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { plainText } from './text';
 import { userSchema } from './auth';
 
 /** Limits shared by the composer and the server, so both refuse the same comment. */
@@ -13,12 +14,11 @@ export const COMMENT_LIMITS = {
   excerptMax: 140,
 } as const;
 
-const base64 = z
-  .string()
+const base64 = plainText({ what: 'a position' })
   .min(4, 'a position must be a base64-encoded Yjs relative position')
   .max(COMMENT_LIMITS.positionMax, 'a position must be a base64-encoded Yjs relative position')
   .regex(/^[A-Za-z0-9+/]+={0,2}$/, 'a position must be a base64-encoded Yjs relative position');
-const quote = z.string().max(COMMENT_LIMITS.quoteMax, `the quoted passage must be at most ${COMMENT_LIMITS.quoteMax} characters`);
+const quote = plainText({ what: 'the quoted passage', multiline: true }).max(COMMENT_LIMITS.quoteMax, `the quoted passage must be at most ${COMMENT_LIMITS.quoteMax} characters`);
 
 /**
  * What a thread discusses. A passage of text is held by two Yjs relative
@@ -30,15 +30,14 @@ export const commentAnchorSchema = z.discriminatedUnion(
   'type',
   [
     z.strictObject({ type: z.literal('text'), from: base64, to: base64, quote: quote.trim().min(1, 'quote the passage the comment is about') }),
-    z.strictObject({ type: z.literal('figure'), figureId: z.string().trim().min(1).max(COMMENT_LIMITS.figureIdMax), quote: quote.optional() }),
+    z.strictObject({ type: z.literal('figure'), figureId: plainText({ what: 'figureId' }).trim().min(1).max(COMMENT_LIMITS.figureIdMax), quote: quote.optional() }),
   ],
   { error: 'anchor must be { type: "text", from, to, quote } or { type: "figure", figureId }' },
 );
 export type CommentAnchor = z.infer<typeof commentAnchorSchema>;
 
 /** Plain text: stored as written and shown as text, never as HTML. */
-export const commentBodySchema = z
-  .string({ error: 'body is required' })
+export const commentBodySchema = plainText({ what: 'a comment', error: 'body is required', multiline: true })
   .trim()
   .min(1, 'write something before sending')
   .max(COMMENT_LIMITS.bodyMax, `a comment must be at most ${COMMENT_LIMITS.bodyMax} characters`);

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { plainText } from './text';
 
 /** Largest single Yjs update accepted over HTTP, as base64 characters (about 3 MB of update). */
 export const MAX_UPDATE_BASE64 = 4_000_000;
@@ -14,8 +15,7 @@ export type DocumentState = z.infer<typeof documentStateSchema>;
 
 /** Body of POST /api/notebooks/:notebookId/document/updates: one Yjs update (or several merged), base64. */
 export const documentUpdateRequestSchema = z.strictObject({
-  update: z
-    .string()
+  update: plainText({ what: 'update' })
     .min(4)
     .max(MAX_UPDATE_BASE64, 'the update is too large; send smaller changes more often')
     .regex(/^[A-Za-z0-9+/]+={0,2}$/, 'update must be base64'),

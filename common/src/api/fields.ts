@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { plainText } from './text';
 import { SERIES_KINDS } from './series';
 
 const latRange = z
@@ -18,7 +19,7 @@ const depthRange = z
 export const reduceFieldRequestSchema = z.discriminatedUnion('kind', [
   z.strictObject({
     kind: z.enum(['box-mean', 'box-integral']),
-    name: z.string().trim().min(1).max(160),
+    name: plainText({ what: 'name' }).trim().min(1).max(160),
     seriesKind: z.enum(SERIES_KINDS).default('other'),
     lat: latRange,
     lon: lonRange,
@@ -27,7 +28,7 @@ export const reduceFieldRequestSchema = z.discriminatedUnion('kind', [
   }),
   z.strictObject({
     kind: z.literal('zonal-mean'),
-    name: z.string().trim().min(1).max(160),
+    name: plainText({ what: 'name' }).trim().min(1).max(160),
     lon: lonRange,
     lat: latRange.optional(),
     depth: depthRange.optional(),

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { plainText } from './text';
 import { yearMonthSchema as monthSchema } from './analysis';
 import {
   anomalyOptionsSchema,
@@ -28,12 +29,12 @@ export const eventSetEntrySchema = z.strictObject({
   start: monthSchema,
   peak: monthSchema,
   end: monthSchema,
-  label: z.string().trim().max(FIGURE_LIMITS.eventLabelMax).default(''),
+  label: plainText({ what: 'label' }).trim().max(FIGURE_LIMITS.eventLabelMax).default(''),
 }).refine((e) => e.start <= e.peak && e.peak <= e.end, 'an event’s peak must lie between its start and end');
 
 /** Body of POST/PUT event sets of a notebook. */
 export const saveEventSetRequestSchema = z.strictObject({
-  name: z.string().trim().min(1).max(120),
+  name: plainText({ what: 'name' }).trim().min(1).max(120),
   /** Where the events first came from (index and rule), kept as provenance. */
   derivedFrom: z.strictObject({ index: binding, rule: eventSourceSchema }).optional(),
   events: z.array(eventSetEntrySchema).max(FIGURE_LIMITS.maxEventsInSet),

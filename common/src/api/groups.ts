@@ -1,11 +1,12 @@
 import { z } from 'zod';
+import { plainText } from './text';
 import { LIMITS } from './limits';
 import { GROUP_ACTIONS, GROUP_ROLES } from '../roles';
 import { userSchema } from './auth';
 
 /** Body of POST /api/groups. */
 export const createGroupRequestSchema = z.strictObject({
-  name: z.string({ error: 'name is required' }).trim().min(1, 'name must not be empty').max(LIMITS.groupNameMax),
+  name: plainText({ what: 'name', error: 'name is required' }).trim().min(1, 'name must not be empty').max(LIMITS.groupNameMax),
 });
 export type CreateGroupRequest = z.infer<typeof createGroupRequestSchema>;
 
@@ -15,7 +16,7 @@ export type RenameGroupRequest = CreateGroupRequest;
 
 /** Body of POST /api/groups/:groupId/members: add a person who already has an account. */
 export const addMemberRequestSchema = z.strictObject({
-  email: z.string().trim().toLowerCase().pipe(z.email({ error: 'e-mail is not a valid address' })),
+  email: plainText({ what: 'e-mail' }).trim().toLowerCase().pipe(z.email({ error: 'e-mail is not a valid address' })),
   role: z.enum(GROUP_ROLES, { error: 'role must be admin or member' }).default('member'),
 });
 export type AddMemberRequest = z.infer<typeof addMemberRequestSchema>;

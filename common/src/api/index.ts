@@ -19,3 +19,5 @@ export * from './demo';
 // E-mail and invitations.
 export * from './invitations';
 export * from './mail';
+// The one rule for request text (issue 23).
+export * from './text';

@@ -1,10 +1,10 @@
 import { z } from 'zod';
+import { plainText } from './text';
 import { LIMITS } from './limits';
 import { GROUP_ROLES, NOTEBOOK_ROLES } from '../roles';
 import { authResponseSchema, registerRequestSchema, userSchema } from './auth';
 
-const invitedEmail = z
-  .string({ error: 'e-mail is required' })
+const invitedEmail = plainText({ what: 'e-mail', error: 'e-mail is required' })
   .trim()
   .toLowerCase()
   .max(LIMITS.emailMax, `e-mail must be at most ${LIMITS.emailMax} characters`)
@@ -78,7 +78,7 @@ export type InvitationPreview = z.infer<typeof invitationPreviewSchema>;
  */
 export const acceptInvitationRequestSchema = z.strictObject({
   name: registerRequestSchema.shape.name.optional(),
-  password: z.string().min(1, 'password must not be empty').max(LIMITS.passwordMax).optional(),
+  password: plainText({ what: 'password' }).min(1, 'password must not be empty').max(LIMITS.passwordMax).optional(),
 });
 export type AcceptInvitationRequest = z.infer<typeof acceptInvitationRequestSchema>;
 

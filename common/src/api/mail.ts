@@ -1,10 +1,10 @@
 import { z } from 'zod';
 
-/** Answer of GET /api/mail/status: whether the in-process mail catcher stands in for SMTP. */
+/** Answer of GET /api/mail/status: whether the in-process local mailbox stands in for SMTP. */
 export const mailStatusSchema = z.object({ fake: z.boolean() });
 export type MailStatus = z.infer<typeof mailStatusSchema>;
 
-/** One message the local mail catcher received. */
+/** One message the local mailbox received. */
 export const capturedMailSummarySchema = z.object({
   id: z.string(),
   to: z.array(z.string()),

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { plainText } from './text';
 import { eventSetEntrySchema } from './figures';
 import { LIMITS } from './limits';
 import { DATA_ORIGINS, SERIES_KINDS, SERIES_LIMITS } from './series';
@@ -25,8 +26,7 @@ export const NOTEBOOK_FILE_LIMITS = {
   maxEventSets: 50,
 } as const;
 
-const ref = z
-  .string({ error: 'a ref must be text' })
+const ref = plainText({ what: 'a ref', error: 'a ref must be text' })
   .trim()
   .min(1, 'a ref must not be empty')
   .max(NOTEBOOK_FILE_LIMITS.refMax)
@@ -35,9 +35,9 @@ const ref = z
 /** A series the document binds, by name: resolved to a series of exactly this name in the importing group. */
 export const notebookFileSeriesSchema = z.strictObject({
   ref,
-  name: z.string().trim().min(1, 'a series needs its name').max(SERIES_LIMITS.nameMax),
+  name: plainText({ what: 'a series name' }).trim().min(1, 'a series needs its name').max(SERIES_LIMITS.nameMax),
   kind: z.enum(SERIES_KINDS, { error: `kind must be one of ${SERIES_KINDS.join(', ')}` }),
-  units: z.string().max(SERIES_LIMITS.textMax).default(''),
+  units: plainText({ what: 'units' }).max(SERIES_LIMITS.textMax).default(''),
   origin: z.enum(DATA_ORIGINS).optional(),
 });
 export type NotebookFileSeries = z.infer<typeof notebookFileSeriesSchema>;
@@ -45,15 +45,15 @@ export type NotebookFileSeries = z.infer<typeof notebookFileSeriesSchema>;
 /** A zonal-mean (time × latitude) field a time–latitude diagram binds, by name. */
 export const notebookFileFieldSchema = z.strictObject({
   ref,
-  name: z.string().trim().min(1, 'a field needs its name').max(160),
-  units: z.string().max(SERIES_LIMITS.textMax).default(''),
+  name: plainText({ what: 'a field name' }).trim().min(1, 'a field needs its name').max(160),
+  units: plainText({ what: 'units' }).max(SERIES_LIMITS.textMax).default(''),
 });
 export type NotebookFileField = z.infer<typeof notebookFileFieldSchema>;
 
 /** A saved event set the document's recipes use; it is created anew in the imported notebook. */
 export const notebookFileEventSetSchema = z.strictObject({
   ref,
-  name: z.string().trim().min(1).max(120),
+  name: plainText({ what: 'an event set name' }).trim().min(1).max(120),
   derivedFrom: z.unknown().optional(),
   events: z.array(eventSetEntrySchema).max(200),
 });
@@ -73,8 +73,8 @@ export const notebookFileSchema = z
   .strictObject({
     format: z.literal(NOTEBOOK_FILE_FORMAT, { error: `format must be "${NOTEBOOK_FILE_FORMAT}"` }),
     formatVersion: z.literal(NOTEBOOK_FILE_VERSION, { error: `formatVersion must be ${NOTEBOOK_FILE_VERSION}; this Upwell reads version ${NOTEBOOK_FILE_VERSION} files` }),
-    title: z.string().trim().min(1, 'title must not be empty').max(LIMITS.notebookTitleMax),
-    description: z.string().trim().max(LIMITS.notebookDescriptionMax).default(''),
+    title: plainText({ what: 'title' }).trim().min(1, 'title must not be empty').max(LIMITS.notebookTitleMax),
+    description: plainText({ what: 'description', multiline: true }).trim().max(LIMITS.notebookDescriptionMax).default(''),
     exportedAt: z.iso.datetime({ error: 'exportedAt must be an ISO-8601 date-time' }),
     editorSchemaVersion: z.number().int().min(1),
     document: z.looseObject({ type: z.literal('doc', { error: 'document must be a ProseMirror document (type "doc")' }), content: z.array(proseMirrorNode).optional() }),

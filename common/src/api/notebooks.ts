@@ -1,15 +1,14 @@
 import { z } from 'zod';
+import { plainText } from './text';
 import { LIMITS } from './limits';
 import { NOTEBOOK_ROLES, NOTEBOOK_ACTIONS } from '../roles';
 import { userSchema } from './auth';
 
-const title = z
-  .string({ error: 'title is required' })
+const title = plainText({ what: 'title', error: 'title is required' })
   .trim()
   .min(1, 'title must not be empty')
   .max(LIMITS.notebookTitleMax, `title must be at most ${LIMITS.notebookTitleMax} characters`);
-const description = z
-  .string()
+const description = plainText({ what: 'description', multiline: true })
   .trim()
   .max(LIMITS.notebookDescriptionMax, `description must be at most ${LIMITS.notebookDescriptionMax} characters`);
 
@@ -28,7 +27,7 @@ export type UpdateNotebookRequest = z.infer<typeof updateNotebookRequestSchema>;
 
 /** Query of GET /api/groups/:groupId/notebooks. */
 export const listNotebooksQuerySchema = z.strictObject({
-  q: z.string().trim().max(200).optional(),
+  q: plainText({ what: 'q' }).trim().max(200).optional(),
   archived: z.enum(['true', 'false']).optional(),
 });
 export type ListNotebooksQuery = z.infer<typeof listNotebooksQuerySchema>;

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { plainText } from './text';
 import { SERIES_KINDS } from './series';
 
 /**
@@ -113,15 +114,10 @@ export type CsvImportPreview = z.infer<typeof csvImportPreviewSchema>;
 export const csvImportErrorSchema = csvImportIssueSchema;
 export type CsvImportErrorView = z.infer<typeof csvImportErrorSchema>;
 
-const noControlChars = (s: string) => !/[\u0000-\u0008\u000b-\u001f\u007f]/.test(s);
-function text(label: string, max: number, opts: { min?: number; singleLine?: boolean } = {}) {
-  const base = z.string({ error: `${label} must be text` }).trim();
-  const sized = (opts.min ? base.min(opts.min, `${label} must not be empty`) : base).max(
-    max,
-    `${label} must be at most ${max} characters`,
-  );
-  if (opts.singleLine === false) return sized.refine(noControlChars, `${label} must not contain control characters`);
-  return sized.refine((s) => noControlChars(s) && !/[\n\r\t]/.test(s), `${label} must be one line of text`);
+/** A describing field of a mapped column: the shared text rule (one line unless `singleLine: false`), trimmed and sized. */
+function field(label: string, max: number, opts: { min?: number; singleLine?: boolean } = {}) {
+  const base = plainText({ what: label, error: `${label} must be text`, multiline: opts.singleLine === false }).trim();
+  return (opts.min ? base.min(opts.min, `${label} must not be empty`) : base).max(max, `${label} must be at most ${max} characters`);
 }
 
 /** Overrides of what the import detects, sent with the upload. */
@@ -133,9 +129,9 @@ export const csvImportOptionsSchema = z.strictObject({
   /** Lines to skip before the header (or the first data row), instead of detecting them. */
   skipLines: z.number().int().nonnegative().max(10_000).optional(),
   /** Long layout: the date column, or the year and month columns. */
-  dateColumns: z.array(z.string()).min(1).max(2).optional(),
+  dateColumns: z.array(plainText({ what: 'a date column' })).min(1).max(2).optional(),
   missingMarkers: z
-    .array(z.string().trim().max(SERIES_IMPORT_LIMITS.missingMarkerMax))
+    .array(plainText({ what: 'a missing-value marker' }).trim().max(SERIES_IMPORT_LIMITS.missingMarkerMax))
     .max(SERIES_IMPORT_LIMITS.maxMissingMarkers)
     .optional(),
   sentinels: z.array(z.number().finite()).max(SERIES_IMPORT_LIMITS.maxSentinels).optional(),
@@ -152,19 +148,19 @@ export const depthLayerSchema = z
 export type DepthLayer = z.infer<typeof depthLayerSchema>;
 
 const mappedColumn = z.strictObject({
-  column: z.string(),
+  column: plainText({ what: 'column' }),
   skip: z.literal(false),
-  name: text('name', SERIES_IMPORT_LIMITS.seriesNameMax, { min: 1 }),
+  name: field('name', SERIES_IMPORT_LIMITS.seriesNameMax, { min: 1 }),
   kind: z.enum(SERIES_KINDS, { error: `kind must be one of ${SERIES_KINDS.join(', ')}` }),
-  variable: text('variable', SERIES_IMPORT_LIMITS.variableMax, { min: 1 }),
+  variable: field('variable', SERIES_IMPORT_LIMITS.variableMax, { min: 1 }),
   /** Free text for now (e.g. `PgC`, `degC`); empty means dimensionless. */
-  units: text('units', SERIES_IMPORT_LIMITS.unitsMax),
-  region: text('region', SERIES_IMPORT_LIMITS.regionMax).default(''),
+  units: field('units', SERIES_IMPORT_LIMITS.unitsMax),
+  region: field('region', SERIES_IMPORT_LIMITS.regionMax).default(''),
   depthLayer: depthLayerSchema.nullable().default(null),
-  source: text('source', SERIES_IMPORT_LIMITS.sourceMax).default(''),
-  notes: text('notes', SERIES_IMPORT_LIMITS.notesMax, { singleLine: false }).default(''),
+  source: field('source', SERIES_IMPORT_LIMITS.sourceMax).default(''),
+  notes: field('notes', SERIES_IMPORT_LIMITS.notesMax, { singleLine: false }).default(''),
 });
-const skippedColumn = z.strictObject({ column: z.string(), skip: z.literal(true) });
+const skippedColumn = z.strictObject({ column: plainText({ what: 'column' }), skip: z.literal(true) });
 
 /** What to do with one candidate column: import it described so, or skip it. */
 export const columnMappingSchema = z.discriminatedUnion('skip', [mappedColumn, skippedColumn]);

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { plainText } from './text';
 import { userSchema } from './auth';
 
 /** What a stored series measures. */
@@ -30,20 +31,20 @@ export const SERIES_LIMITS = {
   sparklinePoints: 120,
 } as const;
 
-const text = (what: string, max: number = SERIES_LIMITS.textMax) =>
-  z.string().trim().max(max, `${what} must be at most ${max} characters`);
+const field = (what: string, max: number = SERIES_LIMITS.textMax) =>
+  plainText({ what, multiline: what === 'notes' }).trim().max(max, `${what} must be at most ${max} characters`);
 
 /** The describing fields of a series, as a person edits them. */
 export const seriesMetadataSchema = z.strictObject({
-  name: text('name', SERIES_LIMITS.nameMax).min(1, 'name must not be empty'),
+  name: field('name', SERIES_LIMITS.nameMax).min(1, 'name must not be empty'),
   kind: z.enum(SERIES_KINDS, { error: `kind must be one of ${SERIES_KINDS.join(', ')}` }),
-  variable: text('variable').default(''),
-  units: text('units').default(''),
-  region: text('region').default(''),
-  depthLayer: text('depth layer').default(''),
-  source: text('source').default(''),
+  variable: field('variable').default(''),
+  units: field('units').default(''),
+  region: field('region').default(''),
+  depthLayer: field('depth layer').default(''),
+  source: field('source').default(''),
   origin: z.enum(DATA_ORIGINS, { error: `origin must be one of ${DATA_ORIGINS.join(', ')}` }).default('unspecified'),
-  notes: text('notes', SERIES_LIMITS.notesMax).default(''),
+  notes: field('notes', SERIES_LIMITS.notesMax).default(''),
 });
 export type SeriesMetadata = z.infer<typeof seriesMetadataSchema>;
 
@@ -55,7 +56,7 @@ export type UpdateSeriesRequest = z.infer<typeof updateSeriesRequestSchema>;
 
 /** Query of GET /api/groups/:groupId/series. */
 export const listSeriesQuerySchema = z.strictObject({
-  q: z.string().trim().max(200).optional(),
+  q: plainText({ what: 'q' }).trim().max(200).optional(),
   kind: z.enum(SERIES_KINDS).optional(),
   sort: z.enum(['name', 'updated', 'kind']).default('name'),
   order: z.enum(['asc', 'desc']).default('asc'),

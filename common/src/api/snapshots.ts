@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { plainText } from './text';
 import { userSchema } from './auth';
 import { figureResultSchema, usedSeriesSchema } from '../figure-kinds';
 
@@ -12,13 +13,11 @@ export const SNAPSHOT_LIMITS = {
 
 /** Body of POST /api/notebooks/:notebookId/snapshots (lead author): publish the notebook as it stands. */
 export const publishSnapshotRequestSchema = z.strictObject({
-  title: z
-    .string({ error: 'title is required' })
+  title: plainText({ what: 'title', error: 'title is required' })
     .trim()
     .min(1, 'title must not be empty')
     .max(SNAPSHOT_LIMITS.titleMax, `title must be at most ${SNAPSHOT_LIMITS.titleMax} characters`),
-  releaseNote: z
-    .string()
+  releaseNote: plainText({ what: 'releaseNote', multiline: true })
     .trim()
     .max(SNAPSHOT_LIMITS.releaseNoteMax, `releaseNote must be at most ${SNAPSHOT_LIMITS.releaseNoteMax} characters`)
     .default(''),

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { plainText } from './text';
 import { DATA_ORIGINS } from './series';
 import { columnMappingSchema, csvImportPreviewSchema } from './series-import';
 
@@ -51,8 +52,8 @@ export const importUploadRequestSchema = z
   .strictObject({
     origin: z.enum(DATA_ORIGINS).default('unspecified'),
     columns: z.array(columnMappingSchema).max(1000).default([]),
-    grids: z.array(z.strictObject({ variable: z.string().min(1), name: z.string().trim().min(1).max(160) })).max(100).default([]),
-    targets: z.record(z.string(), z.uuid({ error: 'a target must be the id of an existing series' })).default({}),
+    grids: z.array(z.strictObject({ variable: plainText({ what: 'variable' }).min(1), name: plainText({ what: 'name' }).trim().min(1).max(160) })).max(100).default([]),
+    targets: z.record(plainText({ what: 'a target column' }), z.uuid({ error: 'a target must be the id of an existing series' })).default({}),
   })
   .refine((b) => b.columns.some((c) => !c.skip) || b.grids.length > 0, 'choose at least one column, variable or field to import');
 export type ImportUploadRequest = z.input<typeof importUploadRequestSchema>;

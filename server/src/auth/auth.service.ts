@@ -1,11 +1,11 @@
-import { EntityManager } from '@mikro-orm/sqlite';
+import { EntityManager, UniqueConstraintViolationException } from '@mikro-orm/sqlite';
 import { ConflictException, Injectable, UnauthorizedException } from '@nestjs/common';
 import { EventEmitter2 } from '@nestjs/event-emitter';
 import { JwtService } from '@nestjs/jwt';
 import type { AuthResponse, LoginRequest, RegisterRequest } from '@upwell/common';
 import { User } from '../users/user.entity';
 import { presentUser } from '../users/user.presenter';
-import { hashPassword, verifyPassword } from './password';
+import { hashPassword, verifyAgainstDummy, verifyPassword } from './password';
 import type { TokenPayload } from './token-payload';
 
 /** Events of sign-in sessions, for listeners elsewhere (the socket closes a signed-out person's connections). */
@@ -15,6 +15,7 @@ export const AUTH_EVENTS = { signedOutEverywhere: 'auth.signed-out-everywhere' }
 export interface SignedOutEverywhere {
   userId: string;
 }
+const ALREADY_EXISTS = 'an account with this e-mail already exists; sign in instead';
 
 /** Sign-up, sign-in, sign-out and token checks. */
 @Injectable()
@@ -27,17 +28,26 @@ export class AuthService {
 
   async register(body: RegisterRequest): Promise<AuthResponse> {
     if (await this.em.count(User, { email: body.email })) {
-      throw new ConflictException('an account with this e-mail already exists; sign in instead');
+      throw new ConflictException(ALREADY_EXISTS);
     }
     const user = this.em.create(User, { email: body.email, name: body.name, passwordHash: await hashPassword(body.password) });
-    await this.em.flush();
+    try {
+      await this.em.flush();
+    } catch (err) {
+      // Two sign-ups for one address at once both pass the check above; the unique index decides, and the loser hears the same 409.
+      if (!(err instanceof UniqueConstraintViolationException)) throw err;
+      this.em.clear();
+      throw new ConflictException(ALREADY_EXISTS);
+    }
     return this.issue(user);
   }
 
   async login(body: LoginRequest): Promise<AuthResponse> {
     const user = await this.em.findOne(User, { email: body.email }, { populate: ['passwordHash'] });
-    // Same answer for an unknown e-mail and a wrong password, so sign-in reveals no accounts.
-    if (!user || !(await verifyPassword(user.passwordHash, body.password))) {
+    // Same answer, and about the same time (an Argon2 check either way), for an unknown e-mail and a wrong password,
+    // so sign-in reveals no accounts.
+    const matches = user ? await verifyPassword(user.passwordHash, body.password) : await verifyAgainstDummy(body.password);
+    if (!user || !matches) {
       throw new UnauthorizedException('the e-mail or the password is wrong');
     }
     return this.issue(user);

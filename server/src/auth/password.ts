@@ -1,4 +1,5 @@
 import { hash, verify } from '@node-rs/argon2';
+import { randomBytes } from 'node:crypto';
 
 /**
  * Password hashing with Argon2id (RFC 9106) through @node-rs/argon2, using
@@ -15,4 +16,19 @@ export async function verifyPassword(storedHash: string, password: string): Prom
   } catch {
     return false;
   }
+}
+
+let dummyHash: Promise<string> | null = null;
+
+/**
+ * Spends the time of a real verification and answers false: sign-in calls it
+ * for an unknown address, so its answer time does not tell which addresses
+ * have accounts (OWASP Authentication Cheat Sheet, "authentication responses").
+ * The dummy hash is made once, with the same parameters as real ones, from a
+ * random password nobody knows.
+ */
+export async function verifyAgainstDummy(password: string): Promise<false> {
+  dummyHash ??= hash(randomBytes(24).toString('base64url'));
+  await verifyPassword(await dummyHash, password);
+  return false;
 }

@@ -1,5 +1,6 @@
 import { ArgumentsHost, Catch, HttpException, HttpStatus, Logger, type ExceptionFilter } from '@nestjs/common';
 import type { Response } from 'express';
+import { loggableError } from './loggable-error';
 
 /** The shape of every error the API answers with. */
 export interface ApiError {
@@ -52,7 +53,7 @@ export class AllExceptionsFilter implements ExceptionFilter {
       res.status(exception.getStatus()).json(toApiError(exception.getStatus(), exception.getResponse()));
       return;
     }
-    this.logger.error(exception instanceof Error ? exception.stack ?? exception.message : String(exception));
+    this.logger.error(loggableError(exception));
     if (isStorageFull(exception)) {
       // 507 Insufficient Storage (RFC 4918 §11.5): not the client's fault, and worth retrying once space is freed.
       res.status(507).json(toApiError(507, 'the server has run out of storage space; nothing of this request was stored. Try again later, and tell whoever runs the server'));

@@ -7,6 +7,8 @@ import { DEFAULT_NETCDF_LIMITS, type NetcdfLimits } from '../series/netcdf/size-
 /** Settings the server runs with, read once from the environment at start. */
 export interface AppConfig {
   port: number;
+  /** Address to listen on (HOST): loopback by default, so a fresh server is reachable from this machine only. */
+  host: string;
   /** Folder for the SQLite file, uploads and generated secrets. */
   dataDir: string;
   databaseFile: string;
@@ -19,13 +21,18 @@ export interface AppConfig {
   authAttemptsPerMinute: number;
   /** Largest upload accepted, in bytes (streamed to disk, never held in memory). */
   uploadMaxBytes: number;
-  /** Seed the demo group, people, series and notebooks on start (SEED_DEMO, on unless "false"). */
+  /**
+   * Seed the demo group, people, series and notebooks on start: SEED_DEMO "true"
+   * (the default) on a loopback bind, "force" on any bind, "false" never.
+   */
   seedDemo: boolean;
+  /** The demo seed was asked for but refused because HOST is not a loopback address (the start-up log says so). */
+  seedDemoRefused: boolean;
   /** The one foreign origin browsers may call the API and socket from (CORS); the app's own address by default. */
   appOrigin: string;
   /** Redis for socket fan-out across several server processes, or null for one process alone. */
   redisUrl: string | null;
-  /** Outgoing SMTP server, or null to start the in-process mail catcher instead. */
+  /** Outgoing SMTP server, or null to start the in-process local mailbox instead. */
   smtpUrl: string | null;
   /** Sender of every mail Upwell sends. */
   mailFrom: string;
@@ -41,6 +48,10 @@ export interface AppConfig {
   netcdfLimits: NetcdfLimits;
   /** Upload quotas and timing (see README "Uploads"). */
   uploads: UploadLimits;
+  /** Quiet spell after a person's last mention before their mention mail goes (one mail for all of them). */
+  mentionMailQuietMs: number;
+  /** Longest a mention waits for its mail while mentions keep coming. */
+  mentionMailMaxWaitMs: number;
 }
 
 /** How much one person may upload, and how long staged files and silent uploads last. */
@@ -118,10 +129,21 @@ export function withoutPassword(raw: string): string {
   }
 }
 
-function seedDemo(raw: string | undefined): boolean {
-  if (raw === undefined || raw === '' || raw === 'true') return true;
-  if (raw === 'false') return false;
-  throw new Error(`SEED_DEMO must be "true" or "false", got "${raw}"`);
+/** Whether an address to listen on is reachable from this machine only (127.0.0.0/8, ::1, localhost). */
+export function isLoopbackHost(host: string): boolean {
+  return host === 'localhost' || host === '::1' || /^127(\.\d{1,3}){3}$/.test(host);
+}
+
+/**
+ * The demo's passwords are public (README, GET /api/demo), so the seed runs on a
+ * loopback bind only unless SEED_DEMO=force says the person means it.
+ */
+function seedDemo(raw: string | undefined, host: string): { seedDemo: boolean; seedDemoRefused: boolean } {
+  if (raw === 'false') return { seedDemo: false, seedDemoRefused: false };
+  if (raw === 'force') return { seedDemo: true, seedDemoRefused: false };
+  if (raw !== undefined && raw !== '' && raw !== 'true') throw new Error(`SEED_DEMO must be "true", "false" or "force", got "${raw}"`);
+  const loopback = isLoopbackHost(host);
+  return { seedDemo: loopback, seedDemoRefused: !loopback };
 }
 
 /** APP_ORIGIN as a browser sends it (scheme://host[:port], no path), or the fallback. */
@@ -149,6 +171,8 @@ function mailConfig(env: NodeJS.ProcessEnv) {
     appUrl,
     invitationTtlHours: ttl,
     invitationsPerHour: positiveInt('INVITATIONS_PER_HOUR', env.INVITATIONS_PER_HOUR, 30),
+    mentionMailQuietMs: positiveInt('MENTION_MAIL_QUIET_MS', env.MENTION_MAIL_QUIET_MS, 60_000),
+    mentionMailMaxWaitMs: positiveInt('MENTION_MAIL_MAX_WAIT_MS', env.MENTION_MAIL_MAX_WAIT_MS, 15 * 60_000),
   };
 }
 
@@ -159,8 +183,10 @@ export function loadAppConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
   const defaultWeb = resolve(__dirname, '../../../web/dist');
   const webDist = env.WEB_DIST === '' ? null : resolve(env.WEB_DIST || defaultWeb);
   const port = positiveInt('PORT', env.PORT, 3000);
+  const host = env.HOST || '127.0.0.1';
   return {
     port,
+    host,
     dataDir,
     databaseFile: join(dataDir, 'upwell.sqlite'),
     jwtSecret: jwtSecret(dataDir, env.JWT_SECRET),
@@ -168,7 +194,7 @@ export function loadAppConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     webDist: webDist && existsSync(join(webDist, 'index.html')) ? webDist : null,
     authAttemptsPerMinute: positiveInt('AUTH_ATTEMPTS_PER_MINUTE', env.AUTH_ATTEMPTS_PER_MINUTE, 20),
     uploadMaxBytes: positiveInt('UPLOAD_MAX_BYTES', env.UPLOAD_MAX_BYTES, 2 * 1024 ** 3),
-    seedDemo: seedDemo(env.SEED_DEMO),
+    ...seedDemo(env.SEED_DEMO, host),
     appOrigin: origin(env.APP_ORIGIN, `http://localhost:${port}`),
     redisUrl: redisUrl(env.REDIS_URL),
     ...mailConfig(env),

@@ -1,5 +1,6 @@
 import { Body, Controller, Delete, Get, Headers, HttpCode, Param, Post, UseGuards } from '@nestjs/common';
 import { ApiBearerAuth, ApiOperation, ApiTags } from '@nestjs/swagger';
+import { ThrottlerGuard } from '@nestjs/throttler';
 import {
   acceptInvitationRequestSchema,
   createGroupInvitationRequestSchema,
@@ -100,11 +101,13 @@ export class InvitationsController {
   }
 
   @Public()
+  // Accepting signs in or signs up, so it is throttled per client address as they are (AUTH_ATTEMPTS_PER_MINUTE).
+  @UseGuards(ThrottlerGuard)
   @Post('invitations/:token/accept')
   @HttpCode(200)
   @ApiOperation({
     summary: 'Accept an invitation: signed in (bearer token), or with { name, password } to create the invited account, or { password } to sign in to it',
-    description: 'Answers { accessToken, user, granted: { kind, groupId, notebookId, role } }.',
+    description: 'Answers { accessToken, user, granted: { kind, groupId, notebookId, role } }. The account is always the invited address: signed in as anyone else → 403. 429 past AUTH_ATTEMPTS_PER_MINUTE.',
   })
   @ApiJsonBody(acceptInvitationRequestSchema)
   accept(

@@ -2,17 +2,19 @@ import { EntityManager } from '@mikro-orm/sqlite';
 import { Inject, Injectable, Logger } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { OnEvent } from '@nestjs/event-emitter';
+import { loggableError } from '../common/loggable-error';
 import { APP_CONFIG, type AppConfig } from '../config/app-config';
 import { Notebook, NotebookRoleAssignment } from '../notebooks/notebook.entity';
 import { Notification } from '../notifications/notification.entity';
 import { User } from '../users/user.entity';
 import { MAIL_EVENTS, type MentionsCreatedEvent, type SnapshotPublishedEvent } from './mail-events';
 import { MailSender } from './mail-sender';
-import { mentionMail, snapshotPublishedMail } from './mail-templates';
+import { snapshotPublishedMail } from './mail-templates';
+import { MentionDigest } from './mention-digest';
 
 /**
  * Notification mail: a published snapshot to the notebook's people, a mention
- * to the person mentioned — each only if they keep notification mail on.
+ * to the person mentioned (batched by MentionDigest) — each only if they keep notification mail on.
  * Runs after the change it reports has committed; a failure is logged, never
  * thrown back at whoever caused the event.
  */
@@ -24,6 +26,7 @@ export class MailNotifier {
   constructor(
     private readonly em: EntityManager,
     private readonly sender: MailSender,
+    private readonly mentions: MentionDigest,
     @Inject(ConfigService) config: ConfigService,
   ) {
     this.config = config.getOrThrow<AppConfig>(APP_CONFIG);
@@ -48,28 +51,21 @@ export class MailNotifier {
       // One mail per person: nobody learns the others' addresses.
       for (const r of roles) await this.sender.send({ ...content, to: r.user.email, groupId: notebook.group.id });
     } catch (err) {
-      this.logger.error(`snapshot mail for ${e.snapshotId} failed: ${err instanceof Error ? err.message : String(err)}`);
+      this.logger.error(`snapshot mail for ${e.snapshotId} failed: ${loggableError(err)}`);
     }
   }
 
+  /** Mentions go to the digest, which mails each person once their mentions have come to a quiet spell. */
   @OnEvent(MAIL_EVENTS.mentionsCreated, { async: true, promisify: true })
   async mentionsCreated(e: MentionsCreatedEvent): Promise<void> {
     try {
       const em = this.em.fork();
-      const created = await em.find(Notification, { id: { $in: e.notificationIds } }, { populate: ['recipient', 'by', 'notebook'] });
+      const created = await em.find(Notification, { id: { $in: e.notificationIds } }, { populate: ['recipient', 'notebook'] });
       for (const n of created) {
-        if (!n.recipient.emailNotifications) continue;
-        const content = mentionMail({
-          byName: n.by.name,
-          notebookTitle: n.notebook.title,
-          excerpt: n.excerpt,
-          link: `${this.config.appUrl}/notebooks/${n.notebook.id}`,
-          settingsUrl: this.settingsUrl(),
-        });
-        await this.sender.send({ ...content, to: n.recipient.email, groupId: n.notebook.group.id });
+        if (n.recipient.emailNotifications) this.mentions.add(n.recipient.id, n.notebook.group.id, n.id);
       }
     } catch (err) {
-      this.logger.error(`mention mail failed: ${err instanceof Error ? err.message : String(err)}`);
+      this.logger.error(`mention mail failed: ${loggableError(err)}`);
     }
   }
 

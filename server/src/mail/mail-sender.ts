@@ -2,7 +2,7 @@ import { Inject, Injectable, Logger, type OnModuleDestroy } from '@nestjs/common
 import { ConfigService } from '@nestjs/config';
 import { createTransport, type Transporter } from 'nodemailer';
 import { APP_CONFIG, type AppConfig } from '../config/app-config';
-import { GROUP_HEADER, MailCatcher } from './mail-catcher';
+import { GROUP_HEADER, LocalMailbox } from './local-mailbox';
 
 /** A mail ready to send: both bodies, and the group it concerns (for the local outbox). */
 export interface OutgoingMail {
@@ -16,7 +16,7 @@ export interface OutgoingMail {
 /** What came of sending: sent, or not with the reason. */
 export type SendResult = { sent: true } | { sent: false; reason: string };
 
-/** Sends mail with nodemailer over SMTP: to SMTP_URL, or to the local mail catcher when it is unset. */
+/** Sends mail with nodemailer over SMTP: to SMTP_URL, or to the local mailbox when it is unset. */
 @Injectable()
 export class MailSender implements OnModuleDestroy {
   private readonly logger = new Logger('Mail');
@@ -25,7 +25,7 @@ export class MailSender implements OnModuleDestroy {
 
   constructor(
     @Inject(ConfigService) config: ConfigService,
-    private readonly catcher: MailCatcher,
+    private readonly mailbox: LocalMailbox,
   ) {
     this.config = config.getOrThrow<AppConfig>(APP_CONFIG);
   }
@@ -56,8 +56,8 @@ export class MailSender implements OnModuleDestroy {
   private transporter(): Transporter {
     this.transport ??= this.config.smtpUrl
       ? createTransport(this.config.smtpUrl)
-      : // The catcher speaks plain SMTP on loopback (RFC 5321); no TLS to negotiate.
-        createTransport({ host: '127.0.0.1', port: this.catcher.port, secure: false, ignoreTLS: true });
+      : // The local mailbox speaks plain SMTP on loopback (RFC 5321); no TLS to negotiate.
+        createTransport({ host: '127.0.0.1', port: this.mailbox.port, secure: false, ignoreTLS: true });
     return this.transport;
   }
 }

@@ -97,3 +97,32 @@ export function mentionMail(m: { byName: string; notebookTitle: string; excerpt:
     settingsUrl: m.settingsUrl,
   });
 }
+
+/** One mention in a digest. */
+export interface MentionItem {
+  byName: string;
+  notebookTitle: string;
+  excerpt: string;
+  link: string;
+}
+
+/** At most this many mentions are quoted in one digest; the rest are counted. */
+export const DIGEST_MAX_ITEMS = 100;
+
+/** Several mentions of one person that came in close together, in one mail. */
+export function mentionDigestMail(d: { items: MentionItem[]; link: string; settingsUrl: string }): MailContent {
+  const shown = d.items.slice(0, DIGEST_MAX_ITEMS);
+  const rest = d.items.length - shown.length;
+  const notebooks = new Set(d.items.map((i) => i.notebookTitle));
+  const where = notebooks.size === 1 ? `“${[...notebooks][0]}”` : `${notebooks.size} notebooks`;
+  return render({
+    subject: `You were mentioned ${d.items.length} times in ${where}`,
+    lines: [
+      `You were mentioned in ${d.items.length} comments in ${where}. They came in close together, so here they are in one mail:`,
+      ...shown.map((i) => `${i.byName} in “${i.notebookTitle}”: “${i.excerpt}” (${i.link})`),
+      ...(rest > 0 ? [`…and ${rest} more; every one is in your notifications in the app.`] : []),
+    ],
+    link: { href: d.link, label: notebooks.size === 1 ? 'Open the notebook' : 'Open Upwell' },
+    settingsUrl: d.settingsUrl,
+  });
+}

@@ -11,14 +11,14 @@ export class MailController {
   constructor(private readonly mail: MailService) {}
 
   @Get('status')
-  @ApiOperation({ summary: 'Whether the in-process mail catcher stands in for SMTP; answers { fake }' })
+  @ApiOperation({ summary: 'Whether the in-process local mailbox stands in for SMTP; answers { fake }' })
   status() {
     return this.mail.status();
   }
 
   @Get('outbox')
   @ApiOperation({
-    summary: 'Mail the local catcher received, newest first (only while it is in use; group admins see their groups’ mail)',
+    summary: 'Mail the local mailbox received, newest first (only while it is in use; group admins see their groups’ mail)',
     description: 'Answers { fake: true, messages }; 404 when SMTP_URL is set.',
   })
   outbox(@CurrentUser() user: User) {

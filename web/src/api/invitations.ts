@@ -39,7 +39,7 @@ export function useInvitations(base: string) {
   return { list, send, revoke };
 }
 
-/** Whether the local mail catcher is in use (only then is there an outbox to show). */
+/** Whether the local mailbox is in use (only then is there an outbox to show). */
 export function useMailStatus(enabled: boolean) {
   return useQuery({ queryKey: ['mail-status'], queryFn: () => api<MailStatus>('/mail/status'), enabled, staleTime: Infinity });
 }

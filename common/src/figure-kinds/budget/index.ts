@@ -1,6 +1,7 @@
 /** Budget closure: a tendency against the sum of its terms, month by month, with the residual. */
 import { z } from 'zod';
 import { defineFigureKind } from '../kind';
+import { plainText } from '../../api/text';
 import { FIGURE_LIMITS, seriesBindingSchema } from '../shared/recipe-parts';
 import { nullableNumber } from '../shared/result-parts';
 import { budgetSpec } from './spec';
@@ -9,7 +10,7 @@ import { budgetSpec } from './spec';
 export const budgetRecipeSchema = z.strictObject({
   kind: z.literal('budget'),
   tendency: seriesBindingSchema,
-  terms: z.array(z.strictObject({ name: z.string().trim().min(1).max(60), series: seriesBindingSchema })).min(1).max(FIGURE_LIMITS.maxBoundSeries),
+  terms: z.array(z.strictObject({ name: plainText({ what: 'a term name' }).trim().min(1).max(60), series: seriesBindingSchema })).min(1).max(FIGURE_LIMITS.maxBoundSeries),
 });
 
 /** `data` of a budget figure: month records for lines, and one record per term and month for stacking. */

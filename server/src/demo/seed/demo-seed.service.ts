@@ -4,6 +4,7 @@ import { ConfigService } from '@nestjs/config';
 import { ModuleRef } from '@nestjs/core';
 import type { DemoInfo } from '@upwell/common';
 import { AuthService } from '../../auth/auth.service';
+import { loggableError } from '../../common/loggable-error';
 import { APP_CONFIG, type AppConfig } from '../../config/app-config';
 import { Group, GroupMembership } from '../../groups/group.entity';
 import { User } from '../../users/user.entity';
@@ -11,7 +12,7 @@ import { DEMO_GROUP_NAME, DEMO_PEOPLE, demoBanner } from '../demo-people';
 import { seedDemoContent, type DemoCast } from './demo-content';
 
 /**
- * Seeds the demo once, at start, when SEED_DEMO is not "false" and the
+ * Seeds the demo once, at start, when the config allows it (SEED_DEMO, loopback HOST) and the
  * database has no demo group yet; later starts only print the sign-in
  * details. A seed that fails is logged and leaves the server running.
  */
@@ -31,12 +32,17 @@ export class DemoSeed implements OnApplicationBootstrap {
   }
 
   async onApplicationBootstrap(): Promise<void> {
+    if (this.config.seedDemoRefused) {
+      this.logger.warn(
+        `not seeding the demo: its passwords are public and HOST=${this.config.host} is not a loopback address; SEED_DEMO=force seeds it anyway, SEED_DEMO=false silences this`,
+      );
+    }
     if (!this.config.seedDemo) return;
     try {
       await RequestContext.create(this.orm.em, () => this.run());
       process.stdout.write(`\n${demoBanner()}\n\n`);
     } catch (err) {
-      this.logger.error(`the demo seed failed: ${err instanceof Error ? (err.stack ?? err.message) : String(err)}`);
+      this.logger.error(`the demo seed failed: ${loggableError(err)}`);
     }
   }
 

@@ -6,8 +6,9 @@ import { PageTitle } from '../../components/PageTitle';
 import { formatWhen } from '../../components/dates';
 
 /**
- * Mail the local mail catcher received (only while no SMTP server is configured),
- * for the groups the person administers. Bodies are shown as text; HTML only in a
+ * Mail the local mailbox received (only while no SMTP server is configured),
+ * for the groups the person administers and to the person themselves (secret links
+ * hidden from all but the addressee, by the server). Bodies are shown as text; HTML only in a
  * sandboxed frame, never in the page.
  */
 export default function MailOutboxPage() {
@@ -17,7 +18,8 @@ export default function MailOutboxPage() {
     <>
       <PageTitle title="Mail outbox" />
       <Text as="p" size="2" color="gray" mb="4">
-        No SMTP server is configured, so Upwell keeps the mail it sends here instead of delivering it.
+        No SMTP server is configured, so Upwell keeps the mail it sends here instead of delivering it. An invitation's
+        link is shown only to the person it was sent to; everyone else sees that the mail went.
       </Text>
       <ErrorNote error={outbox.error} />
       {outbox.data && messages.length === 0 && <EmptyState title="No mail yet">Invitations and notifications about your groups will show up here.</EmptyState>}

@@ -3,7 +3,7 @@ import { ConfigService } from '@nestjs/config';
 import type { CapturedMail } from '@upwell/common';
 import { simpleParser } from 'mailparser';
 import { randomUUID } from 'node:crypto';
-import { mkdirSync } from 'node:fs';
+import { chmodSync, mkdirSync } from 'node:fs';
 import { readdir, readFile, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { SMTPServer } from 'smtp-server';
@@ -15,14 +15,15 @@ export const GROUP_HEADER = 'X-Upwell-Group';
 const ID = /^[0-9a-f-]{36}$/;
 
 /**
- * The local mail catcher: when SMTP_URL is unset, a real SMTP server
+ * The local mailbox: when SMTP_URL is unset, a real SMTP server
  * (smtp-server) listens on a loopback port inside the app and keeps each
- * message it receives in DATA_DIR/mail as the raw .eml and a small JSON record.
- * Nothing leaves the machine, and the invite flow still works end to end.
+ * message it receives in DATA_DIR/mail as the raw .eml and a small JSON record,
+ * readable by the server's own user only (invitation links in them are
+ * credentials). Nothing leaves the machine, and the invite flow still works end to end.
  */
 @Injectable()
-export class MailCatcher implements OnModuleInit, OnModuleDestroy {
-  private readonly logger = new Logger('MailCatcher');
+export class LocalMailbox implements OnModuleInit, OnModuleDestroy {
+  private readonly logger = new Logger('LocalMailbox');
   private server: SMTPServer | null = null;
   private boundPort: number | null = null;
   private readonly dir: string;
@@ -34,25 +35,27 @@ export class MailCatcher implements OnModuleInit, OnModuleDestroy {
     this.dir = join(app.dataDir, 'mail');
   }
 
-  /** Whether the catcher stands in for a real SMTP server. */
+  /** Whether the local mailbox stands in for a real SMTP server. */
   get active(): boolean {
     return this.enabled;
   }
 
   /** The loopback port it listens on (once started). */
   get port(): number {
-    if (this.boundPort === null) throw new Error('the mail catcher is not listening');
+    if (this.boundPort === null) throw new Error('the local mailbox is not listening');
     return this.boundPort;
   }
 
   async onModuleInit(): Promise<void> {
     if (!this.enabled) return;
-    mkdirSync(this.dir, { recursive: true });
+    mkdirSync(this.dir, { recursive: true, mode: 0o700 });
+    // A folder made by an older version kept the umask's mode.
+    chmodSync(this.dir, 0o700);
     const server = new SMTPServer({
       authOptional: true,
       // Loopback only, so no TLS: STARTTLS would need a certificate for nothing.
       disabledCommands: ['STARTTLS'],
-      banner: 'Upwell local mail catcher',
+      banner: 'Upwell local mailbox',
       size: 5 * 1024 * 1024,
       logger: false,
       onData: (stream, _session, callback) => {
@@ -66,7 +69,7 @@ export class MailCatcher implements OnModuleInit, OnModuleDestroy {
         });
       },
     });
-    server.on('error', (err) => this.logger.warn(`mail catcher: ${err.message}`));
+    server.on('error', (err) => this.logger.warn(`local mailbox: ${err.message}`));
     await new Promise<void>((resolve, reject) => {
       server.once('error', reject);
       server.listen(0, '127.0.0.1', () => resolve());
@@ -122,8 +125,8 @@ export class MailCatcher implements OnModuleInit, OnModuleDestroy {
       receivedAt: new Date().toISOString(),
       groupId: typeof groupHeader === 'string' ? groupHeader : null,
     };
-    await writeFile(join(this.dir, `${id}.eml`), raw);
+    await writeFile(join(this.dir, `${id}.eml`), raw, { mode: 0o600 });
     // The JSON is written last: a listed record always has its .eml beside it.
-    await writeFile(join(this.dir, `${id}.json`), JSON.stringify(record, null, 2));
+    await writeFile(join(this.dir, `${id}.json`), JSON.stringify(record, null, 2), { mode: 0o600 });
   }
 }
