@@ -1,7 +1,7 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { sampleCorrelation, linearRegression } from 'simple-statistics';
-import { runAnomaly, runBudget, runComposite, runEvents, runIntegrate, runLagCorrelation, runTrend } from '@upwell/common';
+import { runAnomaly, runBudget, runComposite, runEvents, runIntegrate, runLagCorrelation, runTrend } from '../src/analysis/analysis-routes';
 import { startTestApp, type TestApp } from './test-app';
 import { buildUser, type TestUser } from './factories';
 
