@@ -22,6 +22,8 @@ export * from './series/trend';
 export * from './series/rms';
 export * from './series/budget';
 export * from './series/integrate';
+export * from './series/inventory-change';
+export * from './series/fit-trend-and-season';
 // Statistics
 export * from './stats/neumaier-sum';
 export * from './stats/welford';
@@ -43,6 +45,8 @@ export * from './stats/significance-threshold';
 export * from './stats/prng';
 export * from './stats/lag-correlation';
 export * from './stats/dft';
+export * from './stats/fft';
+export * from './stats/lag-search-surrogates';
 export * from './stats/ebisuzaki';
 // ENSO events
 export * from './events/round-half-away';
