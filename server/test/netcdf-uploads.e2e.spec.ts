@@ -94,6 +94,22 @@ describe('NetCDF uploads, fields and reductions over HTTP', () => {
     }
   });
 
+  it('stores the time axis calendar on the imported series version (noleap, 360_day, standard)', async () => {
+    for (const cal of ['noleap', '360_day', 'standard']) {
+      const preview = (await upload(`calendar-${cal}.nc`).expect(201)).body as UploadPreview;
+      const variable = preview.netcdf!.variables.find((v) => v.use === 'series')!.name;
+      const imported = (
+        await request(t.url)
+          .post(`/api/uploads/${preview.uploadId}/import`)
+          .set(u.auth)
+          .send({ origin: 'model-output', columns: [{ column: variable, skip: false, name: `calendar ${cal}`, kind: 'other', variable, units: '' }] })
+          .expect(200)
+      ).body as ImportUploadResponse;
+      const detail = (await request(t.url).get(`/api/series/${imported.series[0].id}`).set(u.auth).expect(200)).body;
+      expect(detail.versions[0].calendar, cal).toBe(cal);
+    }
+  });
+
   it('refuses broken or non-NetCDF files with a clear 4xx and stores nothing', async () => {
     const before = (await request(t.url).get(`/api/groups/${groupId}/series`).set(u.auth).expect(200)).body.total;
     for (const file of ['truncated-classic.nc', 'truncated-classic-header.nc', 'truncated-hdf5.nc', 'not-netcdf.h5', 'empty.nc', 'huge-dimension.nc']) {
