@@ -58,6 +58,7 @@ export * from './units/constants';
 export * from './units/unit-error';
 export * from './units/parse-unit';
 export * from './units/convert';
+export * from './units/units-for-carbon';
 // Grid geometry
 export * from './grid/earth-radius';
 export * from './grid/edges-from-centres';
