@@ -15,6 +15,8 @@ export * from './series/running-mean';
 export * from './series/base-month-stats';
 export * from './series/climatology-monthly';
 export * from './series/climatology-harmonic';
+export * from './series/sliding-base-periods';
+export * from './series/sliding-climatology';
 export * from './series/detrend';
 export * from './series/standardize-by-month';
 export * from './series/anomaly';

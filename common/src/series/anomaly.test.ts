@@ -173,3 +173,26 @@ describe('anomaly() — detrend, standardize, smooth', () => {
     expect(sm.anomaly.values[10]).toBeCloseTo((r[9] + r[10] + r[11]) / 3, 12);
   });
 });
+
+describe('anomaly() — sliding 30-year base periods (NOAA CPC ONI practice, centred, updated every 5 years)', () => {
+  // 1950-01 .. 2024-12 with a trend: a month of 2003 is measured against 1986–2015, one of 1953 against
+  // 1936–1965 shifted to the data (1950–1979), one of 2022 against the latest 30 complete years (1995–2024).
+  const values = Array.from({ length: 75 * 12 }, (_, i) => 20 + 2 * Math.cos((2 * Math.PI * i) / 12) + 0.002 * i + 0.3 * Math.sin(i * 0.7));
+  const res = anomaly({ series: { start: '1950-01', values }, base: 'sliding-30yr' });
+  const meanOf = (month: number, from: number, to: number) => mean(Array.from({ length: to - from + 1 }, (_, k) => values[(from - 1950 + k) * 12 + month])) as number;
+
+  it('subtracts, month by month, the mean of that calendar month over the block’s base period', () => {
+    for (const [year, month, from, to] of [[2003, 6, 1986, 2015], [1953, 0, 1950, 1979], [2022, 11, 1995, 2024], [1961, 3, 1950, 1979], [1966, 3, 1951, 1980]]) {
+      const i = (year - 1950) * 12 + month;
+      expect(res.anomaly.values[i] as number).toBeCloseTo(values[i] - meanOf(month, from, to), 12);
+    }
+    expect(res.climatology[0] as number).toBeCloseTo(meanOf(0, 1995, 2024), 12);
+  });
+
+  it('follows a trend that a fixed base leaves in the anomalies, and refuses detrend with it', () => {
+    const fixed = anomaly({ series: { start: '1950-01', values }, base: { from: '1991-01', to: '2020-12' } });
+    const early = (r: typeof res) => Math.abs(mean(r.anomaly.values.slice(0, 120)) as number);
+    expect(early(res)).toBeLessThan(early(fixed) / 3);
+    expect(() => anomaly({ series: { start: '1950-01', values }, base: 'sliding-30yr', detrend: true })).toThrow(AnalysisInputError);
+  });
+});

@@ -5,6 +5,7 @@ import { monthlyClimatology } from './climatology-monthly';
 import { fitTrendAndSeason } from './fit-trend-and-season';
 import { formatMonth, parseMonth } from './month';
 import { runningMean } from './running-mean';
+import { slidingClimatology } from './sliding-climatology';
 import { standardizeByMonth } from './standardize-by-month';
 import { scratchFloat64, scratchSlot } from '../stats/scratch';
 import { toFloat64Into } from './to-float64';
@@ -17,8 +18,11 @@ const X_SLOT = scratchSlot();
 /** Options of anomaly(): the body of POST /api/analysis/anomaly. */
 export interface AnomalyInput {
   series: MonthlySeries;
-  /** Base period of the climatology, or "whole-record": the series' first to last month. */
-  base: { from: string; to: string } | 'whole-record';
+  /**
+   * Base period of the climatology; "whole-record": the series' first to last month; "sliding-30yr":
+   * centred 30-year bases updated every 5 years (slidingBasePeriods; not with detrend).
+   */
+  base: { from: string; to: string } | 'whole-record' | 'sliding-30yr';
   method?: 'monthly-mean' | 'harmonic';
   harmonics?: number;
   standardize?: boolean;
@@ -47,6 +51,7 @@ export interface AnomalyOutput {
  * period that ends before it starts is rejected (AnalysisInputError).
  */
 export function anomaly(req: AnomalyInput): AnomalyOutput {
+  if (req.base === 'sliding-30yr') return slidingAnomaly({ ...req, base: 'sliding-30yr' });
   const start = parseMonth(req.series.start);
   const base = req.base === 'whole-record' ? { from: req.series.start, to: formatMonth(start + Math.max(0, req.series.values.length - 1)) } : req.base;
   const baseFrom = parseMonth(base.from);
@@ -113,4 +118,27 @@ function subtractInto(x: Float64Array, start: number, climatology: number[]): (n
   }
   if (anyMissing) for (let i = 0; i < out.length; i++) if (out[i] !== out[i]) out[i] = null;
   return out;
+}
+
+/**
+ * anomaly() against sliding 30-year base periods (slidingClimatology): each month minus the
+ * climatology of its block's base; standardize divides by the sd of each calendar month over the whole
+ * record; smooth last. The climatology returned is the latest block's. Detrending is refused: a
+ * sliding base already follows slow changes, and the two would remove the trend twice.
+ */
+function slidingAnomaly(req: AnomalyInput & { base: 'sliding-30yr' }): AnomalyOutput {
+  if (req.detrend) throw new AnalysisInputError('detrend cannot be combined with sliding base periods (the sliding base already follows slow changes)');
+  const start = parseMonth(req.series.start);
+  const x = toFloat64Into(req.series.values, scratchFloat64(X_SLOT, req.series.values.length));
+  const clim = slidingClimatology(x, start, { method: req.method, harmonics: req.harmonics, minYears: req.minYears });
+  const warnings = x.length === 0 ? ['series is empty', ...clim.warnings] : clim.warnings;
+  let a: Float64Array = new Float64Array(x.length);
+  for (let i = 0; i < x.length; i++) a[i] = x[i] - clim.perMonth[i];
+  if (req.standardize) {
+    const s = standardizeByMonth(a, start, start, start + x.length - 1);
+    warnings.push(...s.warnings);
+    a = s.values;
+  }
+  if (req.smooth !== undefined && req.smooth > 1) a = runningMean(a, req.smooth);
+  return { anomaly: { start: req.series.start, values: toNullable(a) }, climatology: toNullable(clim.latest), warnings };
 }
