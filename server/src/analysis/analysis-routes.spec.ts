@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { nino12Series } from '../../../common/test-fixtures/read-fixture';
 import { ANALYSIS_ROUTES } from './analysis-routes';
 
-// Moved with the run functions from common/src/api/analysis.test.ts (issue 13 item 4); same bodies, same checks.
-const nino = nino12Series();
+// Moved with the run functions from common/src/api/analysis.test.ts (issue 13 item 4); same checks. The
+// Niño 1+2 fixture lives outside the server's rootDir, so a deterministic SST-like series stands in.
+const nino = { start: '1950-01', values: Array.from({ length: 732 }, (_, i) => 23 + 2.5 * Math.cos((2 * Math.PI * (i - 2)) / 12) + Math.sin(i * 0.37) + 0.8 * Math.sin(i / 23)) };
 const bodies: Record<keyof typeof ANALYSIS_ROUTES, unknown> = {
   anomaly: { series: nino, base: { from: '1971-01', to: '2000-12' }, smooth: 3, standardize: true },
   'lag-correlation': { x: nino, y: { start: '1951-01', values: nino.values.slice(0, 400) }, maxLag: 24, surrogates: 100 },
