@@ -111,6 +111,9 @@ describe('POST /api/analysis/* over HTTP', () => {
     expect(Object.keys(res.body.strongest).sort()).toEqual(['lag', 'n', 'nEff', 'p', 'pSearch', 'r']);
     expect(res.body.strongest.lag).toBe(3);
     expect(res.body.strongest.pSearch).toBe(0);
+    // Without `surrogates` the route draws 1000 (issue 14 contract), so pSearch is a multiple of 1/1000.
+    const plain = await post('lag-correlation', { x: index, y: carbon, maxLag: 12 }).expect(200);
+    expect(Number.isInteger(plain.body.strongest.pSearch * 1000)).toBe(true);
     const tr = await post('trend', { series: index }).expect(200);
     for (const key of ['slopeStdErrAdjusted', 'nEffResiduals', 'pAdjusted']) expect(tr.body).toHaveProperty(key);
     expect(tr.body.slopeStdErrAdjusted).toBeGreaterThan(tr.body.slopeStdErr);

@@ -134,7 +134,7 @@ describe('lagCorrelation() — the strongest lag and its search-corrected p (Ebi
   // Monte Carlo under the null: independent pairs, 120 months, lags ±24. Expected rate of a valid
   // 5 % test: 5 %; with S surrogates and p = count/S, P(p < 0.05) = ⌈0.05·S⌉/(S + 1) ≈ 5 % for
   // exchangeable surrogates, so 3–7 % is the acceptance band (±2 binomial sd at 500 pairs ≈ ±1.9 %).
-  // 100 surrogates per pair (not the default 1000) keep the test to about a second per case on a quiet machine.
+  // 100 surrogates per pair (not the route's default 1000) keep the test to about a second per case on a quiet machine.
   for (const [phiX, phiY, label] of [[0.8, 0.6, 'AR(1) φ 0.8 and 0.6'], [0, 0, 'white noise']] as const) {
     it(`rejects the null at 5 % in 3–7 % of 500 independent ${label} pairs with pSearch (pointwise p of the maximum: far more)`, () => {
       const rng = mulberry32(7);
@@ -161,7 +161,7 @@ describe('lagCorrelation() — the strongest lag and its search-corrected p (Ebi
     const x = ar1(30, 0.3, 21);
     const y = ar1(30, 0.3, 22);
     for (let i = 0; i + 20 < 30; i++) y[i + 20] = x[i];
-    const res = lagCorrelation({ x: { start: '2000-01', values: x }, y: { start: '2000-01', values: y }, maxLag: 20, surrogates: 0 });
+    const res = lagCorrelation({ x: { start: '2000-01', values: x }, y: { start: '2000-01', values: y }, maxLag: 20 });
     const at20 = res.lags.find((l) => l.lag === 20)!;
     expect(at20.r).toBeCloseTo(1, 12);
     expect(res.strongest!.n).toBeGreaterThanOrEqual(20);

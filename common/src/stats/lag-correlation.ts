@@ -23,7 +23,10 @@ export interface LagCorrelationInput {
   method?: 'pearson' | 'spearman';
   /** Per-lag test: t test with nEff ("ar1", default) or phase-randomised surrogates (Ebisuzaki 1997). */
   significance?: LagSignificance;
-  /** Number of phase-randomised surrogates (default 1000); 0 skips them (pSearch null). */
+  /**
+   * Number of phase-randomised surrogates; none when absent (pSearch null), so callers that do not
+   * show pSearch pay nothing. POST /api/analysis/lag-correlation draws DEFAULT_SURROGATES by default.
+   */
   surrogates?: number;
   /** Seed of the surrogates' PRNG (default DEFAULT_SURROGATE_SEED), so a result repeats. */
   seed?: number;
@@ -32,7 +35,7 @@ export interface LagCorrelationInput {
 /** The per-lag significance tests of lagCorrelation(). */
 export type LagSignificance = 'ar1' | 'phase-randomised';
 
-/** Surrogates drawn when a request names no number. */
+/** Surrogates POST /api/analysis/lag-correlation draws when a request names no number. */
 export const DEFAULT_SURROGATES = 1000;
 /** Seed of the surrogate PRNG when a request names none (any fixed number; this one is the paper's year). */
 export const DEFAULT_SURROGATE_SEED = 1997;
@@ -133,7 +136,7 @@ function strongestLag(req: LagCorrelationInput, lags: LagCorrelationRow[], prepa
       if (best < 0 || observedAbsR[q] > observedAbsR[best]) best = q;
     }
   });
-  const surrogates = req.surrogates ?? DEFAULT_SURROGATES;
+  const surrogates = req.surrogates ?? 0;
   const x = prepared ? presentSpan(prepared.px) : null;
   const y = prepared ? presentSpan(prepared.py) : null;
   const search =

@@ -1,5 +1,6 @@
 import {
   ANALYSIS_SCHEMAS,
+  DEFAULT_SURROGATES,
   anomaly,
   budget,
   composite,
@@ -31,7 +32,8 @@ export function runAnomaly(body: AnomalyRequest): AnomalyResponse {
 }
 /** Runs the lag-correlation route on a parsed body. */
 export function runLagCorrelation(body: LagCorrelationRequest): LagCorrelationResponse {
-  return lagCorrelation(body);
+  // The route's contract: 1000 surrogates unless the request says otherwise (the engine draws none by default).
+  return lagCorrelation({ ...body, surrogates: body.surrogates ?? DEFAULT_SURROGATES });
 }
 /** Runs the events route on a parsed body. */
 export function runEvents(body: EventsRequest): EventsResponse {
