@@ -15,6 +15,8 @@ export * from './series/running-mean';
 export * from './series/base-month-stats';
 export * from './series/climatology-monthly';
 export * from './series/climatology-harmonic';
+export * from './series/sliding-base-periods';
+export * from './series/sliding-climatology';
 export * from './series/detrend';
 export * from './series/standardize-by-month';
 export * from './series/anomaly';
@@ -22,6 +24,8 @@ export * from './series/trend';
 export * from './series/rms';
 export * from './series/budget';
 export * from './series/integrate';
+export * from './series/inventory-change';
+export * from './series/fit-trend-and-season';
 // Statistics
 export * from './stats/neumaier-sum';
 export * from './stats/welford';
@@ -43,6 +47,8 @@ export * from './stats/significance-threshold';
 export * from './stats/prng';
 export * from './stats/lag-correlation';
 export * from './stats/dft';
+export * from './stats/fft';
+export * from './stats/lag-search-surrogates';
 export * from './stats/ebisuzaki';
 // ENSO events
 export * from './events/round-half-away';
@@ -54,6 +60,7 @@ export * from './units/constants';
 export * from './units/unit-error';
 export * from './units/parse-unit';
 export * from './units/convert';
+export * from './units/units-for-carbon';
 // Grid geometry
 export * from './grid/earth-radius';
 export * from './grid/edges-from-centres';

@@ -1,7 +1,7 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { sampleCorrelation, linearRegression } from 'simple-statistics';
-import { runAnomaly, runBudget, runComposite, runEvents, runIntegrate, runLagCorrelation, runTrend } from '@upwell/common';
+import { runAnomaly, runBudget, runComposite, runEvents, runIntegrate, runLagCorrelation, runTrend } from '../src/analysis/analysis-routes';
 import { startTestApp, type TestApp } from './test-app';
 import { buildUser, type TestUser } from './factories';
 import { mulberry32 } from '@upwell/common';
@@ -90,6 +90,27 @@ describe('POST /api/analysis/* over HTTP', () => {
     const ig = await post('integrate', integ).expect(200);
     expect(ig.body).toEqual(JSON.parse(JSON.stringify(runIntegrate(integ))));
     expect(ig.body.total).toBeCloseTo(365 / 365.25, 12);
+  });
+
+  it('integrate honours the series calendar: 12 months of 1 Pg C/yr in 360_day make 360/365.25 Pg C (CF 1.11 §4.4.1: 30-day months)', async () => {
+    const body = { series: { start: '2001-01', values: Array(12).fill(1) }, units: 'Pg C/yr', from: '2001-01', to: '2001-12', calendar: '360_day' };
+    const res = await post('integrate', body).expect(200);
+    expect(res.body.total).toBeCloseTo(360 / 365.25, 12);
+    await post('integrate', { ...body, calendar: 'lunar' }).expect(400);
+  });
+
+  it('lag-correlation answers strongest { lag, r, n, nEff, p, pSearch } with the surrogates asked for, and trend the adjusted SE fields', async () => {
+    const body = { x: index, y: carbon, maxLag: 12, surrogates: 200, seed: 3, significance: 'phase-randomised' };
+    const res = await post('lag-correlation', body).expect(200);
+    expect(Object.keys(res.body.strongest).sort()).toEqual(['lag', 'n', 'nEff', 'p', 'pSearch', 'r']);
+    expect(res.body.strongest.lag).toBe(3);
+    expect(res.body.strongest.pSearch).toBe(0);
+    // Without `surrogates` the route draws 1000 (issue 14 contract), so pSearch is a multiple of 1/1000.
+    const plain = await post('lag-correlation', { x: index, y: carbon, maxLag: 12 }).expect(200);
+    expect(Number.isInteger(plain.body.strongest.pSearch * 1000)).toBe(true);
+    const tr = await post('trend', { series: index }).expect(200);
+    for (const key of ['slopeStdErrAdjusted', 'nEffResiduals', 'pAdjusted']) expect(tr.body).toHaveProperty(key);
+    expect(tr.body.slopeStdErrAdjusted).toBeGreaterThan(tr.body.slopeStdErr);
   });
 
   it('needs sign-in', async () => {

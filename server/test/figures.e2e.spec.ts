@@ -11,6 +11,7 @@ import {
   detectEvents,
   formatMonth,
   integrate,
+  inventoryChange,
   lagCorrelation,
   ols,
   parseMonth,
@@ -247,10 +248,10 @@ describe('POST /api/notebooks/:notebookId/figures', () => {
     const dicA = anomaly({ series: await stored(ids.dic), base }).anomaly;
     const rowsOut = (r.data as { rows: { peak: string; start: string; end: string; carbon: Record<string, number | null> }[] }).rows;
     expect(rowsOut.map((e) => e.peak)).toEqual(events.map((e) => e.peak));
-    const first = parseMonth(START);
     for (const e of rowsOut) {
       expect(e.carbon[ids.flux]).toBeCloseTo(integrate({ series: fluxA, units: 'Pg C/yr', from: e.start, to: e.end }).total, 12);
-      expect(e.carbon[ids.dic]).toBeCloseTo(dicA.values[parseMonth(e.end) - first]! - dicA.values[parseMonth(e.start) - first]!, 12);
+      // Issue 14 item 2: from the start of the first month to the end of the last (was: end-month minus start-month anomaly).
+      expect(e.carbon[ids.dic]).toBeCloseTo(inventoryChange({ series: dicA, from: e.start, to: e.end }), 12);
       expect(e.carbon[ids.index]).toBeNull();
       expect(num(r, `event.${e.peak}.${ids.flux}.PgC`)).toBe(e.carbon[ids.flux]);
     }

@@ -94,6 +94,33 @@ describe('NetCDF uploads, fields and reductions over HTTP', () => {
     }
   });
 
+  it('shows the time units in the preview, and doubts a bounds-less axis stamped at 00:00 on the 1st of each month', async () => {
+    const plain = (await upload('series-classic.nc').expect(201)).body as UploadPreview;
+    // make-fixtures.py writes the series files with units "days since 1950-01-01", mid-month times and bounds.
+    expect(plain.netcdf!.timeUnits).toBe('days since 1950-01-01');
+    expect(plain.netcdf!.timeWarnings).toEqual([]);
+    const starts = (await upload('month-start-stamps.nc').expect(201)).body as UploadPreview;
+    expect(starts.netcdf!.timeUnits).toBe('days since 2000-01-01');
+    expect(starts.netcdf!.timeWarnings).toHaveLength(1);
+    expect(starts.netcdf!.timeWarnings[0]).toMatch(/first of a month.*no bounds.*shifted by one/);
+  });
+
+  it('stores the time axis calendar on the imported series version (noleap, 360_day, standard)', async () => {
+    for (const cal of ['noleap', '360_day', 'standard']) {
+      const preview = (await upload(`calendar-${cal}.nc`).expect(201)).body as UploadPreview;
+      const variable = preview.netcdf!.variables.find((v) => v.use === 'series')!.name;
+      const imported = (
+        await request(t.url)
+          .post(`/api/uploads/${preview.uploadId}/import`)
+          .set(u.auth)
+          .send({ origin: 'model-output', columns: [{ column: variable, skip: false, name: `calendar ${cal}`, kind: 'other', variable, units: '' }] })
+          .expect(200)
+      ).body as ImportUploadResponse;
+      const detail = (await request(t.url).get(`/api/series/${imported.series[0].id}`).set(u.auth).expect(200)).body;
+      expect(detail.versions[0].calendar, cal).toBe(cal);
+    }
+  });
+
   it('refuses broken or non-NetCDF files with a clear 4xx and stores nothing', async () => {
     const before = (await request(t.url).get(`/api/groups/${groupId}/series`).set(u.auth).expect(200)).body.total;
     for (const file of ['truncated-classic.nc', 'truncated-classic-header.nc', 'truncated-hdf5.nc', 'not-netcdf.h5', 'empty.nc', 'huge-dimension.nc']) {

@@ -156,6 +156,22 @@ describe('the series library over HTTP and socket.io', () => {
     expect(res.body.message).toContain('delimiter');
   });
 
+  it('stores the calendar chosen at import on the series version (default standard; an unknown name is a 400)', async () => {
+    const staged = (options?: string) => {
+      const req = request(t.url).post(`/api/groups/${groupId}/uploads`).set(member.auth);
+      return (options ? req.field('options', options) : req).attach('file', join(FIXTURES, 'long-two-columns.csv')).expect(201);
+    };
+    const only = (name: string) => ({ origin: 'model-output', columns: [{ ...mapBoth.columns[0], name }, { column: 'dic_0_100m_PgC', skip: true }] });
+    for (const [options, name, calendar] of [['{"calendar":"360_day"}', 'index 360-day', '360_day'], ['{"calendar":"365_day"}', 'index 365-day', 'noleap'], [undefined, 'index standard', 'standard']] as const) {
+      const preview = (await staged(options)).body as UploadPreview;
+      const imported = await request(t.url).post(`/api/uploads/${preview.uploadId}/import`).set(member.auth).send(only(name)).expect(200);
+      const detail = (await request(t.url).get(`/api/series/${imported.body.series[0].id}`).set(member.auth).expect(200)).body;
+      expect(detail.versions[0].calendar, name).toBe(calendar);
+    }
+    const bad = await request(t.url).post(`/api/groups/${groupId}/uploads`).set(member.auth).field('options', '{"calendar":"lunar"}').attach('file', join(FIXTURES, 'long-two-columns.csv')).expect(400);
+    expect(bad.body.message).toContain('calendar');
+  });
+
   it('refuses a socket without a valid token', async () => {
     const { io } = await import('socket.io-client');
     const socket = io(t.url, { auth: { token: 'forged' }, transports: ['websocket'], reconnection: false, forceNew: true });

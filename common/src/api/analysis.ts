@@ -1,20 +1,12 @@
 /**
  * Request and response schemas of the analysis routes, POST /api/analysis/<name>, with their types
- * inferred from the schemas, the shared limits, and for each route a run function that takes the
- * parsed body and returns the response. Run functions are the pure engine functions; besides what
- * the schemas reject they throw AnalysisInputError (e.g. a period with missing months) or UnitError
- * (unreadable or incompatible units), which the server should answer with 422 and the message.
+ * inferred from the schemas and the shared limits. The server's analysis module (server/src/analysis/
+ * analysis-routes.ts) pairs each with the engine function that answers it.
  */
 import { z } from 'zod';
 import { plainText } from './text';
-import { composite } from '../events/composite';
-import { detectEvents } from '../events/detect-events';
-import { anomaly } from '../series/anomaly';
-import { budget } from '../series/budget';
 import { MAX_HARMONICS } from '../series/climatology-harmonic';
-import { integrate } from '../series/integrate';
-import { trend } from '../series/trend';
-import { lagCorrelation } from '../stats/lag-correlation';
+import { CF_CALENDAR_NAMES } from '../time/normalize-calendar';
 
 /** Longest series accepted, in months (2,000 years). */
 export const MAX_SERIES_MONTHS = 24_000;
@@ -30,6 +22,8 @@ export const MAX_COMPOSITE_EVENTS = 500;
 export const MAX_BUDGET_TERMS = 32;
 /** Most decimals for the events' roundTo. */
 export const MAX_ROUND_DECIMALS = 6;
+/** Most phase-randomised surrogates of one lag-correlation request. */
+export const MAX_SURROGATES = 10_000;
 /** Most harmonics of the harmonic climatology (re-stated for forms; the engine's MAX_HARMONICS). */
 export const MAX_ANOMALY_HARMONICS = MAX_HARMONICS;
 
@@ -74,10 +68,6 @@ export const anomalyResponseSchema = z.object({
 export type AnomalyRequest = z.infer<typeof anomalyRequestSchema>;
 /** Type of a parsed result, inferred from anomalyResponseSchema. */
 export type AnomalyResponse = z.infer<typeof anomalyResponseSchema>;
-/** Runs the anomaly route on a parsed body. */
-export function runAnomaly(body: AnomalyRequest): AnomalyResponse {
-  return anomaly(body);
-}
 
 // ── lag-correlation ──────────────────────────────────────────────────────────────────────
 /** Body of POST /api/analysis/lag-correlation. */
@@ -86,19 +76,24 @@ export const lagCorrelationRequestSchema = z.object({
   y: monthlySeriesSchema,
   maxLag: z.number().int().min(0).max(MAX_LAG_MONTHS),
   method: z.enum(['pearson', 'spearman']).optional(),
+  /** Per-lag test: "ar1" (t test with nEff, the default) or "phase-randomised" (Ebisuzaki 1997 surrogates). */
+  significance: z.enum(['ar1', 'phase-randomised']).optional(),
+  /** Number of phase-randomised surrogates for pSearch (and per-lag p); default 1000, 0 skips them. */
+  surrogates: z.number().int().min(0).max(MAX_SURROGATES).optional(),
+  /** Seed of the surrogates' PRNG (default 1997), so an answer repeats. */
+  seed: z.number().int().min(0).max(0xffffffff).optional(),
 });
+const lagRowSchema = z.object({ lag: z.number().int(), r: nullableNumber, n: z.number().int(), nEff: nullableNumber, p: nullableNumber });
 /** Response of POST /api/analysis/lag-correlation. */
 export const lagCorrelationResponseSchema = z.object({
-  lags: z.array(z.object({ lag: z.number().int(), r: nullableNumber, n: z.number().int(), nEff: nullableNumber, p: nullableNumber })),
+  lags: z.array(lagRowSchema),
+  /** Largest |r| among lags with ≥ 2/3 of the overlap's pairs; p pointwise, pSearch corrected for the search over lags. */
+  strongest: lagRowSchema.extend({ pSearch: nullableNumber }).nullable(),
 });
 /** Type of a parsed body, inferred from lagCorrelationRequestSchema. */
 export type LagCorrelationRequest = z.infer<typeof lagCorrelationRequestSchema>;
 /** Type of a parsed result, inferred from lagCorrelationResponseSchema. */
 export type LagCorrelationResponse = z.infer<typeof lagCorrelationResponseSchema>;
-/** Runs the lag-correlation route on a parsed body. */
-export function runLagCorrelation(body: LagCorrelationRequest): LagCorrelationResponse {
-  return lagCorrelation(body);
-}
 
 // ── events ───────────────────────────────────────────────────────────────────────────────
 /** Body of POST /api/analysis/events. */
@@ -127,10 +122,6 @@ export const eventsResponseSchema = z.object({
 export type EventsRequest = z.infer<typeof eventsRequestSchema>;
 /** Type of a parsed result, inferred from eventsResponseSchema. */
 export type EventsResponse = z.infer<typeof eventsResponseSchema>;
-/** Runs the events route on a parsed body. */
-export function runEvents(body: EventsRequest): EventsResponse {
-  return detectEvents(body);
-}
 
 // ── composite ────────────────────────────────────────────────────────────────────────────
 /** Body of POST /api/analysis/composite; event months must be strictly increasing. */
@@ -167,10 +158,6 @@ export const compositeResponseSchema = z.object({
 export type CompositeRequest = z.infer<typeof compositeRequestSchema>;
 /** Type of a parsed result, inferred from compositeResponseSchema. */
 export type CompositeResponse = z.infer<typeof compositeResponseSchema>;
-/** Runs the composite route on a parsed body. */
-export function runComposite(body: CompositeRequest): CompositeResponse {
-  return composite(body);
-}
 
 // ── trend ────────────────────────────────────────────────────────────────────────────────
 /** Body of POST /api/analysis/trend. */
@@ -182,15 +169,17 @@ export const trendResponseSchema = z.object({
   slopeStdErr: nullableNumber,
   r2: nullableNumber,
   n: z.number().int(),
+  /** OLS SE × √((n − 2)/(nEffResiduals − 2)) (Santer et al. 2000). */
+  slopeStdErrAdjusted: nullableNumber,
+  /** n(1 − r1)/(1 + r1) with r1 the lag-1 autocorrelation of the residuals (NIST definition). */
+  nEffResiduals: nullableNumber,
+  /** Two-sided p of the slope with the adjusted SE and nEffResiduals − 2 degrees of freedom. */
+  pAdjusted: nullableNumber,
 });
 /** Type of a parsed body, inferred from trendRequestSchema. */
 export type TrendRequest = z.infer<typeof trendRequestSchema>;
 /** Type of a parsed result, inferred from trendResponseSchema. */
 export type TrendResponse = z.infer<typeof trendResponseSchema>;
-/** Runs the trend route on a parsed body. */
-export function runTrend(body: TrendRequest): TrendResponse {
-  return trend(body);
-}
 
 // ── budget ───────────────────────────────────────────────────────────────────────────────
 /** Body of POST /api/analysis/budget: at least one named term. */
@@ -212,15 +201,18 @@ export const budgetResponseSchema = z.object({
 export type BudgetRequest = z.infer<typeof budgetRequestSchema>;
 /** Type of a parsed result, inferred from budgetResponseSchema. */
 export type BudgetResponse = z.infer<typeof budgetResponseSchema>;
-/** Runs the budget route on a parsed body. */
-export function runBudget(body: BudgetRequest): BudgetResponse {
-  return budget(body);
-}
 
 // ── integrate ────────────────────────────────────────────────────────────────────────────
 /** Body of POST /api/analysis/integrate. */
 export const integrateRequestSchema = z
-  .object({ series: monthlySeriesSchema, units: plainText({ what: 'units' }).min(1).max(64), from: yearMonthSchema, to: yearMonthSchema })
+  .object({
+    series: monthlySeriesSchema,
+    units: plainText({ what: 'units' }).min(1).max(64),
+    from: yearMonthSchema,
+    to: yearMonthSchema,
+    /** CF calendar of the series (CF 1.11 §4.4.1; aliases accepted); default standard. */
+    calendar: z.enum(CF_CALENDAR_NAMES).optional(),
+  })
   .refine((b) => b.from <= b.to, { message: 'from must not be after to', path: ['to'] });
 /** Response of POST /api/analysis/integrate. */
 export const integrateResponseSchema = z.object({ total: z.number(), units: z.string() });
@@ -228,24 +220,17 @@ export const integrateResponseSchema = z.object({ total: z.number(), units: z.st
 export type IntegrateRequest = z.infer<typeof integrateRequestSchema>;
 /** Type of a parsed result, inferred from integrateResponseSchema. */
 export type IntegrateResponse = z.infer<typeof integrateResponseSchema>;
-/** Runs the integrate route on a parsed body. */
-export function runIntegrate(body: IntegrateRequest): IntegrateResponse {
-  return integrate(body);
-}
 
-/**
- * The seven routes by their URL name, for a controller that registers them in one loop:
- * POST /api/analysis/<name> validates with `request`, calls `run`, and may check with `response`.
- */
-export const ANALYSIS_ROUTES = {
-  anomaly: { request: anomalyRequestSchema, response: anomalyResponseSchema, run: runAnomaly },
-  'lag-correlation': { request: lagCorrelationRequestSchema, response: lagCorrelationResponseSchema, run: runLagCorrelation },
-  events: { request: eventsRequestSchema, response: eventsResponseSchema, run: runEvents },
-  composite: { request: compositeRequestSchema, response: compositeResponseSchema, run: runComposite },
-  trend: { request: trendRequestSchema, response: trendResponseSchema, run: runTrend },
-  budget: { request: budgetRequestSchema, response: budgetResponseSchema, run: runBudget },
-  integrate: { request: integrateRequestSchema, response: integrateResponseSchema, run: runIntegrate },
+/** The seven routes by their URL name, with the schemas that validate their bodies and answers. */
+export const ANALYSIS_SCHEMAS = {
+  anomaly: { request: anomalyRequestSchema, response: anomalyResponseSchema },
+  'lag-correlation': { request: lagCorrelationRequestSchema, response: lagCorrelationResponseSchema },
+  events: { request: eventsRequestSchema, response: eventsResponseSchema },
+  composite: { request: compositeRequestSchema, response: compositeResponseSchema },
+  trend: { request: trendRequestSchema, response: trendResponseSchema },
+  budget: { request: budgetRequestSchema, response: budgetResponseSchema },
+  integrate: { request: integrateRequestSchema, response: integrateResponseSchema },
 } as const;
 
-/** A route name of ANALYSIS_ROUTES. */
-export type AnalysisRouteName = keyof typeof ANALYSIS_ROUTES;
+/** A route name of ANALYSIS_SCHEMAS. */
+export type AnalysisRouteName = keyof typeof ANALYSIS_SCHEMAS;

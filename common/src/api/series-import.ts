@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { plainText } from './text';
+import { CF_CALENDAR_NAMES } from '../time/normalize-calendar';
 import { SERIES_KINDS } from './series';
 
 /**
@@ -135,6 +136,8 @@ export const csvImportOptionsSchema = z.strictObject({
     .max(SERIES_IMPORT_LIMITS.maxMissingMarkers)
     .optional(),
   sentinels: z.array(z.number().finite()).max(SERIES_IMPORT_LIMITS.maxSentinels).optional(),
+  /** CF calendar of the table's months (a model's noleap or 360_day run); default standard. */
+  calendar: z.enum(CF_CALENDAR_NAMES).optional(),
 });
 export type CsvImportOptions = z.infer<typeof csvImportOptionsSchema>;
 

@@ -86,6 +86,8 @@ export const seriesVersionSchema = z.object({
   createdBy: userSchema,
   createdAt: z.string(),
   note: z.string(),
+  /** CF calendar of the months (CF 1.11 §4.4.1), e.g. standard, noleap, 360_day. */
+  calendar: z.string(),
 });
 export type SeriesVersionView = z.infer<typeof seriesVersionSchema>;
 

@@ -25,6 +25,8 @@ export const netcdfPreviewSchema = z.object({
   format: z.enum(['netcdf-classic', 'netcdf4']),
   calendar: z.string().nullable(),
   timeUnits: z.string().nullable(),
+  /** Doubts about the time axis, e.g. stamps at month starts without bounds (possibly end-of-interval). */
+  timeWarnings: z.array(z.string()),
   variables: z.array(netcdfVariableCandidateSchema),
   globalAttributes: z.record(z.string(), z.string()),
 });

@@ -4,7 +4,8 @@
  * then timed several times after a garbage collection where available; the best time is reported
  * with its throughput. Other benches can add cases to BENCH_CASES or call runBench with their own.
  */
-import { runAnomaly, runLagCorrelation } from '../api/analysis';
+import { anomaly } from '../series/anomaly';
+import { lagCorrelation } from '../stats/lag-correlation';
 import { areaMeanSeries } from '../grid/area-mean-series';
 import { cellAreas } from '../grid/cell-areas';
 import { mulberry32, normalVariate } from '../stats/prng';
@@ -54,7 +55,7 @@ export const BENCH_CASES: BenchCase[] = [
     setup: () => {
       const series = syntheticSeries();
       return () => {
-        for (const s of series) runAnomaly({ series: s, base: { from: '1971-01', to: '2000-12' } });
+        for (const s of series) anomaly({ series: s, base: { from: '1971-01', to: '2000-12' } });
       };
     },
   },
@@ -66,7 +67,19 @@ export const BENCH_CASES: BenchCase[] = [
       const series = syntheticSeries();
       const index = syntheticSeries(1, MONTHS, 99)[0];
       return () => {
-        for (const s of series) runLagCorrelation({ x: s, y: index, maxLag: 36 });
+        for (const s of series) lagCorrelation({ x: s, y: index, maxLag: 36, surrogates: 0 });
+      };
+    },
+  },
+  {
+    name: 'lag-correlation ±24 with pSearch (1000 surrogates), 10 series × 600 months vs one index',
+    values: 10 * 1000 * MONTHS * 49,
+    targetMs: 1000,
+    setup: () => {
+      const series = syntheticSeries(10);
+      const index = syntheticSeries(1, MONTHS, 99)[0];
+      return () => {
+        for (const s of series) lagCorrelation({ x: s, y: index, maxLag: 24, surrogates: 1000 });
       };
     },
   },

@@ -3,7 +3,7 @@ import { runningMean } from '../series/running-mean';
 import { toFloat64 } from '../series/to-float64';
 import type { MonthlySeries } from '../series/types';
 import { roundHalfAway } from './round-half-away';
-import { eventStrength, type EventStrength } from './strength';
+import { eventStrength, sustainedStrength, type EventStrength } from './strength';
 
 /** Body of POST /api/analysis/events. */
 export interface EventsInput {
@@ -12,6 +12,11 @@ export interface EventsInput {
   minDuration?: number;
   smooth?: number;
   roundTo?: number;
+  /**
+   * How strength is classed: "peak" (default; the peak |value|, eventStrength) or "sustained" (the class
+   * threshold met in ≥ 3 consecutive overlapping seasons, on rounded values when roundTo is set; sustainedStrength).
+   */
+  strengthRule?: 'peak' | 'sustained';
 }
 
 /** One warm or cold event. start, end and peak are months "YYYY-MM"; months is the run length. */
@@ -52,7 +57,7 @@ export function detectEvents(req: EventsInput): EventsOutput {
     const c = v === v && req.roundTo !== undefined ? roundHalfAway(v, req.roundTo) : v;
     const phase = c >= threshold ? 1 : c <= -threshold ? -1 : 0;
     if (phase === runPhase && phase !== 0) continue;
-    if (runPhase !== 0 && i - runStart >= minDuration) events.push(makeEvent(x, start, runStart, i - 1, runPhase));
+    if (runPhase !== 0 && i - runStart >= minDuration) events.push(makeEvent(x, start, runStart, i - 1, runPhase, req));
     runPhase = phase;
     runStart = i;
   }
@@ -60,7 +65,7 @@ export function detectEvents(req: EventsInput): EventsOutput {
 }
 
 /** Builds the event for the run x[from..to] of the given phase (+1 warm, −1 cold). */
-function makeEvent(x: Float64Array, start: number, from: number, to: number, phase: number): EnsoEvent {
+function makeEvent(x: Float64Array, start: number, from: number, to: number, phase: number, req: EventsInput): EnsoEvent {
   let peak = from;
   for (let i = from + 1; i <= to; i++) if (Math.abs(x[i]) > Math.abs(x[peak])) peak = i;
   return {
@@ -70,6 +75,9 @@ function makeEvent(x: Float64Array, start: number, from: number, to: number, pha
     peak: formatMonth(start + peak),
     peakValue: x[peak],
     months: to - from + 1,
-    strength: eventStrength(Math.abs(x[peak])),
+    strength:
+      req.strengthRule === 'sustained'
+        ? sustainedStrength(x.subarray(from, to + 1), phase > 0 ? 1 : -1, { roundTo: req.roundTo })
+        : eventStrength(Math.abs(x[peak])),
   };
 }

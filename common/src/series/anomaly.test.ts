@@ -1,6 +1,6 @@
 import { linearRegression } from 'simple-statistics';
 import { describe, expect, it } from 'vitest';
-import { nino12Series } from '../../test-fixtures/read-fixture';
+import { fixtureText, nino12Series } from '../../test-fixtures/read-fixture';
 import { mean } from '../stats/mean';
 import { sampleSd } from '../stats/welford';
 import { AnalysisInputError } from './analysis-input-error';
@@ -113,15 +113,40 @@ describe('anomaly() — harmonic climatology', () => {
 });
 
 describe('anomaly() — detrend, standardize, smooth', () => {
-  it('detrend removes the OLS line (x = month number) fitted to the anomalies over the whole series', () => {
-    const values = Array.from({ length: 240 }, (_, i) => 0.05 * i + 3 * Math.cos((2 * Math.PI * i) / 12) + Math.sin(i * 1.3));
-    const base = { from: '1981-01', to: '2000-12' };
-    const raw = anomaly({ series: { start: '1981-01', values }, base }).anomaly.values as number[];
-    const res = anomaly({ series: { start: '1981-01', values }, base, detrend: true }).anomaly.values as number[];
-    // Independent line through the raw anomalies (simple-statistics linearRegression).
-    const line = linearRegression(raw.map((v, i) => [i, v]));
-    for (let i = 0; i < 240; i += 17) expect(res[i]).toBeCloseTo(raw[i] - (line.b + line.m * i), 10);
-    expect(linearRegression(res.map((v, i) => [i, v])).m).toBeCloseTo(0, 12);
+  // Replaces the test of the former sequential detrend (climatology first, then an OLS line through
+  // the anomalies), which issue 14 item 4 retired because the base-period trend leaked into the means.
+  it('detrend fits line and monthly means jointly: the result matches statsmodels OLS with month dummies and every calendar month averages zero', () => {
+    // Reference: common/test-fixtures/scripts/joint-trend-season.py (statsmodels 0.13.5).
+    const ref = JSON.parse(fixtureText('joint-trend-season.json')).co2Like;
+    const base = { from: '1960-03', to: '1974-02' };
+    const res = anomaly({ series: { start: ref.start, values: ref.values }, base, detrend: true });
+    res.anomaly.values.forEach((v, i) => (ref.residuals[i] === null ? expect(v).toBeNull() : expect(v as number).toBeCloseTo(ref.residuals[i], 8)));
+    for (let m = 0; m < 12; m++) {
+      const month = res.anomaly.values.filter((v, i) => (2 + i) % 12 === m && v !== null) as number[];
+      expect(Math.abs(mean(month) as number)).toBeLessThan(1e-9);
+      // The sequential method leaves up to ±0.6 here (same script): the leak the joint fit removes.
+    }
+    expect(Math.max(...ref.sequentialCalendarMonthMeans.map(Math.abs))).toBeGreaterThan(0.3);
+    expect(linearRegression(res.anomaly.values.map((v, i) => [i, v ?? 0]).filter((_, i) => res.anomaly.values[i] !== null)).m).toBeCloseTo(0, 10);
+  });
+
+  it('detrend reports as climatology the fitted seasonal level at the middle of the base period', () => {
+    const ref = JSON.parse(fixtureText('joint-trend-season.json')).co2Like;
+    const res = anomaly({ series: { start: ref.start, values: ref.values }, base: { from: '1961-01', to: '1970-12' }, detrend: true });
+    // Base-period middle = index of 1965-12/1966-01 midpoint from 1960-03: (10 + 129) / 2.
+    for (let m = 0; m < 12; m++) expect(res.climatology[m] as number).toBeCloseTo(ref.monthlyIntercepts[m] + ref.slopePerMonth * ((10 + 129) / 2), 8);
+  });
+
+  it('takes "whole-record" as the base period from the first to the last month of the series', () => {
+    const values = synthetic();
+    const whole = anomaly({ series: { start: '1961-01', values }, base: 'whole-record' });
+    const explicit = anomaly({ series: { start: '1961-01', values }, base: { from: '1961-01', to: '2000-12' } });
+    expect(whole).toEqual(explicit);
+    // A 1998–2020 run against the default 1991–2020 normal is empty; against its whole record it is not (issue 14 item 6).
+    const run = { start: '1998-01', values: values.slice(0, 276) };
+    expect(anomaly({ series: run, base: { from: '1991-01', to: '2020-12' } }).anomaly.values.every((v) => v === null)).toBe(true);
+    expect(anomaly({ series: run, base: 'whole-record' }).anomaly.values.every((v) => v !== null)).toBe(true);
+    expect(anomaly({ series: run, base: { from: '1991-01', to: '2020-12' }, minYears: 20 }).anomaly.values.every((v) => v !== null)).toBe(true);
   });
 
   it('standardize divides by the base-period sd (n − 1) of each calendar month', () => {
@@ -146,5 +171,28 @@ describe('anomaly() — detrend, standardize, smooth', () => {
     expect(sm.anomaly.values[0]).toBeNull();
     const r = raw.anomaly.values as number[];
     expect(sm.anomaly.values[10]).toBeCloseTo((r[9] + r[10] + r[11]) / 3, 12);
+  });
+});
+
+describe('anomaly() — sliding 30-year base periods (NOAA CPC ONI practice, centred, updated every 5 years)', () => {
+  // 1950-01 .. 2024-12 with a trend: a month of 2003 is measured against 1986–2015, one of 1953 against
+  // 1936–1965 shifted to the data (1950–1979), one of 2022 against the latest 30 complete years (1995–2024).
+  const values = Array.from({ length: 75 * 12 }, (_, i) => 20 + 2 * Math.cos((2 * Math.PI * i) / 12) + 0.002 * i + 0.3 * Math.sin(i * 0.7));
+  const res = anomaly({ series: { start: '1950-01', values }, base: 'sliding-30yr' });
+  const meanOf = (month: number, from: number, to: number) => mean(Array.from({ length: to - from + 1 }, (_, k) => values[(from - 1950 + k) * 12 + month])) as number;
+
+  it('subtracts, month by month, the mean of that calendar month over the block’s base period', () => {
+    for (const [year, month, from, to] of [[2003, 6, 1986, 2015], [1953, 0, 1950, 1979], [2022, 11, 1995, 2024], [1961, 3, 1950, 1979], [1966, 3, 1951, 1980]]) {
+      const i = (year - 1950) * 12 + month;
+      expect(res.anomaly.values[i] as number).toBeCloseTo(values[i] - meanOf(month, from, to), 12);
+    }
+    expect(res.climatology[0] as number).toBeCloseTo(meanOf(0, 1995, 2024), 12);
+  });
+
+  it('follows a trend that a fixed base leaves in the anomalies, and refuses detrend with it', () => {
+    const fixed = anomaly({ series: { start: '1950-01', values }, base: { from: '1991-01', to: '2020-12' } });
+    const early = (r: typeof res) => Math.abs(mean(r.anomaly.values.slice(0, 120)) as number);
+    expect(early(res)).toBeLessThan(early(fixed) / 3);
+    expect(() => anomaly({ series: { start: '1950-01', values }, base: 'sliding-30yr', detrend: true })).toThrow(AnalysisInputError);
   });
 });

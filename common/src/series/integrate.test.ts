@@ -40,3 +40,25 @@ describe('integrate()', () => {
     expect(() => integrate({ series, units: 'Pg C', from: '2001-01', to: '2001-01' })).toThrow(UnitError);
   });
 });
+
+describe('integrate() in the series calendar (CF 1.11 §4.4.1)', () => {
+  // Month lengths checked against cftime in time/calendar-days-in-month.test.ts (cf-month-lengths.py).
+  const body = { series: { start: '1997-01', values: Array(24).fill(1) }, units: 'Pg C/yr', from: '1997-05', to: '1998-05' };
+  it('integrates 13 months of 1 Pg C/yr as 390/365.25 in 360_day, 396/365.25 in noleap and standard (1997–98 has no 29 February)', () => {
+    expect(integrate({ ...body, calendar: '360_day' }).total).toBeCloseTo(390 / 365.25, 14);
+    expect(integrate({ ...body, calendar: 'noleap' }).total).toBeCloseTo(396 / 365.25, 14);
+    expect(integrate(body).total).toBeCloseTo(396 / 365.25, 14);
+  });
+
+  it('counts February 2000 as 29 days in standard and all_leap, 28 in noleap / 365_day, 30 in 360_day', () => {
+    const feb = { series: { start: '2000-02', values: [86400] }, units: 'mol C s-1', from: '2000-02', to: '2000-02' };
+    expect(integrate({ ...feb }).total).toBe(29 * 86400 * 86400);
+    expect(integrate({ ...feb, calendar: 'all_leap' }).total).toBe(29 * 86400 * 86400);
+    expect(integrate({ ...feb, calendar: '365_day' }).total).toBe(28 * 86400 * 86400);
+    expect(integrate({ ...feb, calendar: '360_day' }).total).toBe(30 * 86400 * 86400);
+  });
+
+  it('refuses an unknown calendar with a CfTimeError naming it', () => {
+    expect(() => integrate({ ...body, calendar: 'lunar' })).toThrow(/lunar/);
+  });
+});

@@ -1,7 +1,8 @@
 import { parseUnit } from '../units/parse-unit';
 import { UnitError } from '../units/unit-error';
 import { AnalysisInputError } from './analysis-input-error';
-import { daysInMonth, formatMonth, parseMonth } from './month';
+import { normalizeCalendar } from '../time/normalize-calendar';
+import { formatMonth, monthDays, parseMonth } from './month';
 import { isPresent } from './missing';
 import type { MonthlySeries } from './types';
 
@@ -11,6 +12,8 @@ export interface IntegrateInput {
   units: string;
   from: string;
   to: string;
+  /** CF calendar of the series (aliases accepted); default standard. */
+  calendar?: string;
 }
 
 /** Total change over the period, in the rate's unit without its time part ("Pg C/yr" → "Pg C"). */
@@ -21,8 +24,8 @@ export interface IntegrateOutput {
 
 /**
  * Integrates a monthly rate over the months from..to (inclusive): Σ rate_m · (length of month m)
- * in the rate's time unit. Month lengths are true calendar lengths (proleptic Gregorian: January
- * 31 d, February 28 or 29 d); "yr" is the Julian year of 365.25 d, so 1 Pg C/yr over January gives
+ * in the rate's time unit. Month lengths are those of the series' CF calendar (CF 1.11 §4.4.1;
+ * default standard: January 31 d, February 28 or 29 d; noleap never 29; 360_day 30 d); "yr" is the Julian year of 365.25 d, so 1 Pg C/yr over January gives
  * 31/365.25 Pg C; "month" is the mean month of 30.4375 d (so a January at 1 Pg C/month gives
  * 31/30.4375 Pg C — monthly totals should be summed, not integrated); "s" and "d" are exact.
  * A missing month in the period, or a period outside the series, is an AnalysisInputError naming
@@ -32,6 +35,7 @@ export function integrate(req: IntegrateInput): IntegrateOutput {
   const unit = parseUnit(req.units);
   if (unit.time !== -1) throw new UnitError(`unit "${req.units}" is not a rate (per time): nothing to integrate`, req.units);
   if (unit.withoutTime === '') throw new UnitError(`unit "${req.units}" names no quantity to integrate`, req.units);
+  const calendar = normalizeCalendar(req.calendar);
   const from = parseMonth(req.from);
   const to = parseMonth(req.to);
   if (to < from) throw new AnalysisInputError(`period ends (${req.to}) before it starts (${req.from})`);
@@ -51,7 +55,7 @@ export function integrate(req: IntegrateInput): IntegrateOutput {
       missing.push(formatMonth(m));
       continue;
     }
-    const term = (v * daysInMonth(m) * 86400) / secondsPerTimeUnit;
+    const term = (v * monthDays(m, calendar) * 86400) / secondsPerTimeUnit;
     const t = sum + term;
     // Neumaier (1974) compensated sum over the months.
     c += Math.abs(sum) >= Math.abs(term) ? sum - t + term : term - t + sum;

@@ -1,3 +1,5 @@
+import { calendarDaysInMonth } from '../time/calendar-days-in-month';
+import type { CfCalendar } from '../time/types';
 import { AnalysisInputError } from './analysis-input-error';
 
 const MONTH_RE = /^(\d{4})-(0[1-9]|1[0-2])$/;
@@ -30,4 +32,13 @@ export function daysInMonth(index: number): number {
 /** Gregorian leap-year rule: every 4th year, except centuries not divisible by 400. */
 export function isLeapYear(year: number): boolean {
   return (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0;
+}
+
+/**
+ * Days in the month at `index` (months since 0000-01) in a CF calendar (CF 1.11 §4.4.1): noleap
+ * 365-day years, 360_day 30-day months, standard Julian before 1582 … (calendarDaysInMonth).
+ */
+export function monthDays(index: number, calendar: CfCalendar): number {
+  const year = Math.floor(index / 12);
+  return calendarDaysInMonth(year, index - year * 12 + 1, calendar);
 }

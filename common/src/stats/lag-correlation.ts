@@ -6,7 +6,9 @@ import { effectiveSampleSize } from './effective-sample-size';
 import { lagPrefixSums } from './lag-prefix-sums';
 import { LAG_N, LAG_R, LAG_R1X, LAG_R1Y, lagWindowStats, lagWindowStatsComplete, lagWindowStatsFromSums } from './lag-window-stats';
 import { laggedCrossProducts } from './lagged-cross-products';
+import { lagSearchSurrogates } from './lag-search-surrogates';
 import { prepareForCorrelation } from './prepare-for-correlation';
+import { mulberry32 } from './prng';
 import { averageRanks } from './rank';
 import { scratchFloat64, scratchSlot } from './scratch';
 
@@ -19,7 +21,26 @@ export interface LagCorrelationInput {
   y: MonthlySeries;
   maxLag: number;
   method?: 'pearson' | 'spearman';
+  /** Per-lag test: t test with nEff ("ar1", default) or phase-randomised surrogates (Ebisuzaki 1997). */
+  significance?: LagSignificance;
+  /**
+   * Number of phase-randomised surrogates; none when absent (pSearch null), so callers that do not
+   * show pSearch pay nothing. POST /api/analysis/lag-correlation draws DEFAULT_SURROGATES by default.
+   */
+  surrogates?: number;
+  /** Seed of the surrogates' PRNG (default DEFAULT_SURROGATE_SEED), so a result repeats. */
+  seed?: number;
 }
+
+/** The per-lag significance tests of lagCorrelation(). */
+export type LagSignificance = 'ar1' | 'phase-randomised';
+
+/** Surrogates POST /api/analysis/lag-correlation draws when a request names no number. */
+export const DEFAULT_SURROGATES = 1000;
+/** Seed of the surrogate PRNG when a request names none (any fixed number; this one is the paper's year). */
+export const DEFAULT_SURROGATE_SEED = 1997;
+/** Share of the overlap's pairs a lag needs to be eligible as the strongest (two thirds). */
+export const STRONGEST_MIN_PAIR_SHARE = 2 / 3;
 
 /** One lag of the scan; r, nEff and p are null where undefined. */
 export interface LagCorrelationRow {
@@ -30,9 +51,20 @@ export interface LagCorrelationRow {
   p: number | null;
 }
 
-/** Result of lagCorrelation(): every lag from −maxLag to +maxLag. */
+/**
+ * The strongest lag: largest |r| among lags with at least two thirds of the overlap's pairs. p is the
+ * pointwise p of that lag (by the chosen per-lag test); pSearch the search-corrected p (share of
+ * surrogates whose max |r| over the same eligible lags reaches the observed max), null when the
+ * surrogates could not be drawn (gaps inside a series, Spearman, surrogates = 0).
+ */
+export interface StrongestLag extends LagCorrelationRow {
+  pSearch: number | null;
+}
+
+/** Result of lagCorrelation(): every lag from −maxLag to +maxLag, and the strongest (null when no r is defined). */
 export interface LagCorrelationOutput {
   lags: LagCorrelationRow[];
+  strongest: StrongestLag | null;
 }
 
 /**
@@ -42,6 +74,9 @@ export interface LagCorrelationOutput {
  * the paired values; p is the two-sided t-test p-value with nEff − 2 degrees of freedom.
  * Spearman ranks the paired values of each lag (average ranks for ties) and applies the same
  * machinery, nEff included, to the ranks. A lag longer than the overlap gives n = 0 and nulls.
+ * With significance "phase-randomised" each lag's p is instead the share of phase-randomised
+ * surrogates of x whose |r| at that lag reaches the observed one (Pearson, gap-free series; null
+ * otherwise). The strongest lag and its search-corrected pSearch: see StrongestLag.
  */
 export function lagCorrelation(req: LagCorrelationInput): LagCorrelationOutput {
   const nx = req.x.values.length;
@@ -83,7 +118,58 @@ export function lagCorrelation(req: LagCorrelationInput): LagCorrelationOutput {
     } else lagWindowStats(px, i0, py, j0, len, out);
     lags.push(toRow(k, out));
   }
-  return { lags };
+  return { lags, strongest: strongestLag(req, lags, spearman ? null : { px, py, d }) };
+}
+
+/** Picks the strongest eligible lag and draws the surrogates for pSearch (and per-lag p when asked). */
+function strongestLag(req: LagCorrelationInput, lags: LagCorrelationRow[], prepared: { px: Float64Array; py: Float64Array; d: number } | null): StrongestLag | null {
+  let pairs = 0;
+  for (const row of lags) if (row.n > pairs) pairs = row.n;
+  const eligible = new Uint8Array(lags.length);
+  const observedAbsR = new Float64Array(lags.length).fill(NaN);
+  let best = -1;
+  lags.forEach((row, q) => {
+    if (row.r === null) return;
+    observedAbsR[q] = Math.abs(row.r);
+    if (row.n >= STRONGEST_MIN_PAIR_SHARE * pairs) {
+      eligible[q] = 1;
+      if (best < 0 || observedAbsR[q] > observedAbsR[best]) best = q;
+    }
+  });
+  const surrogates = req.surrogates ?? 0;
+  const x = prepared ? presentSpan(prepared.px) : null;
+  const y = prepared ? presentSpan(prepared.py) : null;
+  const search =
+    prepared && x && y && surrogates > 0 && best >= 0
+      ? lagSearchSurrogates({
+          x: x.values,
+          y: y.values,
+          d: prepared.d + y.first - x.first,
+          maxLag: req.maxLag,
+          observedAbsR,
+          eligible,
+          rng: mulberry32(req.seed ?? DEFAULT_SURROGATE_SEED),
+          surrogates,
+        })
+      : null;
+  if (req.significance === 'phase-randomised') {
+    lags.forEach((row, q) => {
+      const p = search ? search.pLag[q] : NaN;
+      row.p = Number.isNaN(p) ? null : p;
+    });
+  }
+  return best < 0 ? null : { ...lags[best], pSearch: search ? search.pSearch : null };
+}
+
+/** The values from the first to the last present one, or null when a gap lies between (surrogates need a complete series). */
+function presentSpan(x: Float64Array): { values: Float64Array; first: number } | null {
+  let first = 0;
+  let last = x.length - 1;
+  while (first <= last && x[first] !== x[first]) first++;
+  while (last >= first && x[last] !== x[last]) last--;
+  if (last - first + 1 < 3) return null;
+  for (let i = first; i <= last; i++) if (x[i] !== x[i]) return null;
+  return { values: x.subarray(first, last + 1), first };
 }
 
 /** Converts the kernel's slots into a response row (NaN → null). */

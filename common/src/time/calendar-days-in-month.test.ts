@@ -1,4 +1,6 @@
 import { describe, expect, it } from 'vitest';
+import { fixtureText } from '../../test-fixtures/read-fixture';
+import { normalizeCalendar } from './normalize-calendar';
 import { calendarDaysInMonth } from './calendar-days-in-month';
 
 describe('calendarDaysInMonth() (CF 1.11 §4.4.1 leap rules)', () => {
@@ -17,4 +19,17 @@ describe('calendarDaysInMonth() (CF 1.11 §4.4.1 leap rules)', () => {
     expect([1, 4, 12].map((m) => calendarDaysInMonth(2001, m, 'standard'))).toEqual([31, 30, 31]);
     expect(calendarDaysInMonth(2001, 1, '360_day')).toBe(30);
   });
+});
+
+describe('calendarDaysInMonth() against cftime', () => {
+  // Reference: common/test-fixtures/scripts/cf-month-lengths.py — cftime 1.6.2, length = next month's first day − this month's.
+  const ref = JSON.parse(fixtureText('cf-month-lengths.json')).lengths as Record<string, Record<string, number[]>>;
+  for (const [name, years] of Object.entries(ref)) {
+    it(`gives cftime's month lengths for calendar "${name}" in ${Object.keys(years).join(', ')}`, () => {
+      const calendar = normalizeCalendar(name);
+      for (const [year, lengths] of Object.entries(years)) {
+        expect(lengths.map((_, m) => calendarDaysInMonth(Number(year), m + 1, calendar))).toEqual(lengths);
+      }
+    });
+  }
 });

@@ -10,3 +10,4 @@ export * from './decode-cf-time';
 export * from './encode-cf-time';
 export * from './month-key';
 export * from './monthly-axis';
+export * from './stamped-at-month-starts';

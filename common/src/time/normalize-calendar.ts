@@ -15,6 +15,9 @@ const ALIASES: Record<string, CfCalendar> = {
   '360_day': '360_day',
 };
 
+/** The calendar names CF 1.11 §4.4.1 defines that can be decoded, canonical names and aliases. */
+export const CF_CALENDAR_NAMES = Object.keys(ALIASES) as [string, ...string[]];
+
 /**
  * Maps a `calendar` attribute to its canonical CF calendar name.
  * A missing attribute means `standard` (CF 1.11 §4.4.1: "the default").

@@ -15,3 +15,9 @@ export const SECONDS_PER_MEAN_MONTH = SECONDS_PER_JULIAN_YEAR / 12;
 
 /** Seconds in a day. */
 export const SECONDS_PER_DAY = 86400;
+
+/**
+ * Density of seawater, kg m-3, used to turn "per kg of seawater" into "per m3" when the data give no
+ * density: 1025 kg m-3 is a common convention of the trade (surface seawater is ~1020–1030), not a measurement.
+ */
+export const SEAWATER_DENSITY_CONVENTION = 1025;

@@ -1,4 +1,4 @@
-import { parseUnit, type ParsedUnit } from './parse-unit';
+import { parseUnit, type ParsedUnit, type ParseUnitOptions } from './parse-unit';
 import { UnitError } from './unit-error';
 
 /** Whether two parsed units have the same dimensions (and so convert by a factor). */
@@ -11,9 +11,9 @@ function sameDimensions(a: ParsedUnit, b: ParsedUnit): boolean {
  * 44.009/12.011 ≈ 3.664. Throws UnitError naming both units when their dimensions differ (mass per
  * area vs per volume, carbon vs an unnamed species, a rate vs an amount).
  */
-export function unitFactor(from: string, to: string): number {
-  const a = parseUnit(from);
-  const b = parseUnit(to);
+export function unitFactor(from: string, to: string, options: ParseUnitOptions = {}): number {
+  const a = parseUnit(from, options);
+  const b = parseUnit(to, options);
   if (!sameDimensions(a, b)) {
     throw new UnitError(`cannot convert "${from}" to "${to}": ${describe(a)} is not ${describe(b)}`, from, to);
   }
@@ -21,8 +21,8 @@ export function unitFactor(from: string, to: string): number {
 }
 
 /** `value` expressed in `from` units, converted to `to` units (see unitFactor). */
-export function convert(value: number, from: string, to: string): number {
-  return value * unitFactor(from, to);
+export function convert(value: number, from: string, to: string, options: ParseUnitOptions = {}): number {
+  return value * unitFactor(from, to, options);
 }
 
 /** Dimension words for error messages, e.g. "carbon per time". */

@@ -1,4 +1,4 @@
-import { CARBON_MOLAR_MASS, CO2_MOLAR_MASS, SECONDS_PER_DAY, SECONDS_PER_JULIAN_YEAR, SECONDS_PER_MEAN_MONTH } from './constants';
+import { CARBON_MOLAR_MASS, CO2_MOLAR_MASS, SEAWATER_DENSITY_CONVENTION, SECONDS_PER_DAY, SECONDS_PER_JULIAN_YEAR, SECONDS_PER_MEAN_MONTH } from './constants';
 import { UnitError } from './unit-error';
 
 /**
@@ -15,6 +15,14 @@ export interface ParsedUnit {
   canonical: string;
   /** Canonical spelling without the time words, e.g. "Pg C" for "Pg C yr-1" (the unit of a rate's integral). */
   withoutTime: string;
+  /** Seawater density (kg m-3) used to turn "per kg" of seawater into per volume, or null when none was needed. */
+  seawaterDensity: number | null;
+}
+
+/** Options of parseUnit(). */
+export interface ParseUnitOptions {
+  /** Density of seawater for "µmol kg-1" ↔ "mmol m-3", kg m-3; default SEAWATER_DENSITY_CONVENTION (1025). */
+  seawaterDensity?: number;
 }
 
 interface Word {
@@ -28,7 +36,12 @@ const TIME: Record<string, [number, string]> = {
   month: [SECONDS_PER_MEAN_MONTH, 'month'], mon: [SECONDS_PER_MEAN_MONTH, 'month'],
   yr: [SECONDS_PER_JULIAN_YEAR, 'yr'], year: [SECONDS_PER_JULIAN_YEAR, 'yr'], a: [SECONDS_PER_JULIAN_YEAR, 'yr'],
 };
-const LENGTH: Record<string, [number, string]> = { m: [1, 'm'], km: [1e3, 'km'] };
+const LENGTH: Record<string, [number, string]> = {
+  m: [1, 'm'], meter: [1, 'm'], meters: [1, 'm'], metre: [1, 'm'], metres: [1, 'm'], km: [1e3, 'km'],
+  cm: [1e-2, 'cm'], centimeter: [1e-2, 'cm'], centimeters: [1e-2, 'cm'], centimetre: [1e-2, 'cm'], centimetres: [1e-2, 'cm'],
+};
+// A mass with no element after it, per unit (kg-1, g-1): a mass of seawater, turned into a volume by the density.
+const SEAWATER_MASS: Record<string, number> = { kg: 1, g: 1e-3 };
 const QUANTITY = /^(n|u|µ|m|k|M|G|T|P)?(g|mol|t)(C|CO2)?$/;
 
 /**
@@ -38,17 +51,30 @@ const QUANTITY = /^(n|u|µ|m|k|M|G|T|P)?(g|mol|t)(C|CO2)?$/;
  * CIAAW conventional weights 12.011 and 44.009 g/mol; "Gt" = Pg. A bare mole unit ("mmol m-3")
  * names no element: it is an amount of an unnamed species, convertible to other mole units but
  * not to mol C or to a mass — write "mmol C m-3" for carbon. "yr" is the Julian year (365.25 d),
- * "month" a mean month (1/12 Julian year). Throws UnitError for anything else.
+ * "month" a mean month (1/12 Julian year). Lengths: m, km, cm (also spelled out: "centimeters",
+ * "centimetres", "metres"). A mass without an element that divides ("µmol kg-1") is a mass of
+ * seawater: 1 kg ≡ 1/ρ m³ with ρ = options.seawaterDensity, by default the convention of 1025 kg m-3
+ * (so 1 µmol kg-1 = 1.025 mmol m-3). Repeated words combine ("mol m-3 m3" is "mol").
+ * Throws UnitError for anything else.
  */
-export function parseUnit(text: string): ParsedUnit {
-  const u: ParsedUnit = { factor: 1, carbon: 0, amount: 0, time: 0, length: 0, canonical: '', withoutTime: '' };
-  const parts: string[] = [];
-  const timeless: string[] = [];
+export function parseUnit(text: string, options: ParseUnitOptions = {}): ParsedUnit {
+  const u: ParsedUnit = { factor: 1, carbon: 0, amount: 0, time: 0, length: 0, canonical: '', withoutTime: '', seawaterDensity: null };
+  // Spelling → exponent, in order of first appearance, so repeated words combine.
+  const parts = new Map<string, { exp: number; time: boolean }>();
+  const add = (spelling: string, exp: number, time = false) => parts.set(spelling, { exp: (parts.get(spelling)?.exp ?? 0) + exp, time });
   for (const { symbol, exp } of attachElements(tokenize(text), text)) {
     const q = QUANTITY.exec(symbol);
     const time = TIME[symbol];
     const length = LENGTH[symbol];
-    if (q) {
+    if (SEAWATER_MASS[symbol] !== undefined && exp < 0) {
+      const rho = options.seawaterDensity ?? SEAWATER_DENSITY_CONVENTION;
+      if (!(rho > 0)) throw new UnitError(`unit "${text}": the seawater density must be positive`, text);
+      // kg^e of seawater = (1/ρ m³)^e.
+      u.factor *= Math.pow(SEAWATER_MASS[symbol] / rho, exp);
+      u.length += 3 * exp;
+      u.seawaterDensity = rho;
+      add('m', 3 * exp);
+    } else if (q) {
       const [, pre = '', base, element] = q;
       if (base === 't' && !['', 'k', 'M', 'G'].includes(pre)) throw new UnitError(`unit "${text}": "${symbol}" is not a supported tonne`, text);
       if (base !== 'mol' && element === undefined) throw new UnitError(`unit "${text}": a mass needs an element, e.g. "Pg C" or "Pg CO2"`, text);
@@ -58,21 +84,21 @@ export function parseUnit(text: string): ParsedUnit {
       u.factor *= Math.pow(PREFIX[pre] * perMol, exp);
       if (element === undefined) u.amount += exp;
       else u.carbon += exp;
-      parts.push(`${pre}${base}${element ? ` ${element}` : ''}${exp === 1 ? '' : exp}`);
-      timeless.push(parts[parts.length - 1]);
+      add(`${pre}${base}${element ? ` ${element}` : ''}`, exp);
     } else if (time || length) {
       const [factor, spelling] = time ?? length;
       u.factor *= Math.pow(factor, exp);
       if (time) u.time += exp;
       else u.length += exp;
-      parts.push(`${spelling}${exp === 1 ? '' : exp}`);
-      if (!time) timeless.push(parts[parts.length - 1]);
+      add(spelling, exp, Boolean(time));
     } else {
       throw new UnitError(`unit "${text}": cannot read "${symbol}"`, text);
     }
   }
-  u.canonical = parts.join(' ');
-  u.withoutTime = timeless.join(' ');
+  const spell = (entries: [string, { exp: number; time: boolean }][]) =>
+    entries.filter(([, p]) => p.exp !== 0).map(([w, p]) => `${w}${p.exp === 1 ? '' : p.exp}`).join(' ');
+  u.canonical = spell([...parts]);
+  u.withoutTime = spell([...parts].filter(([, p]) => !p.time));
   return u;
 }
 

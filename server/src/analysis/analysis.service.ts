@@ -1,5 +1,5 @@
 import { BadRequestException, Injectable } from '@nestjs/common';
-import { AnalysisInputError, UnitError } from '@upwell/common';
+import { AnalysisInputError, CfTimeError, UnitError } from '@upwell/common';
 
 /** Runs the engine's pure operations for the stateless API. */
 @Injectable()
@@ -13,7 +13,7 @@ export class AnalysisService {
     try {
       return operation(body);
     } catch (err) {
-      if (err instanceof AnalysisInputError || err instanceof UnitError) throw new BadRequestException(err.message);
+      if (err instanceof AnalysisInputError || err instanceof UnitError || err instanceof CfTimeError) throw new BadRequestException(err.message);
       throw err;
     }
   }

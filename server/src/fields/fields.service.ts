@@ -75,7 +75,7 @@ export class FieldsService {
     const box = { lat: body.lat, lon: body.lon, ...(body.depth ? { depth: body.depth } : {}) };
     const r = await netcdfFailureAs4xx(this.jobs.run('reduce-box', { path, limits: this.limits, variable: field.variable, options: { box, method } }));
     const described = `${r.provenance.method} of ${field.variable} over ${body.lat[0]}…${body.lat[1]}°N, ${body.lon[0]}…${body.lon[1]}°E${body.depth ? `, ${body.depth[0]}–${body.depth[1]} m` : ''} (${r.provenance.radiusConvention})`;
-    const version = { start: r.start, values: r.values, file: field.file, transform: { type: 'grid-reduction' as const, fieldId: field.id, method: r.provenance.method, description: described } };
+    const version = { start: r.start, values: r.values, file: field.file, calendar: r.calendar, transform: { type: 'grid-reduction' as const, fieldId: field.id, method: r.provenance.method, description: described } };
     const added = await this.em.transactional(async (em) => {
       if (body.seriesId) {
         const target = await em.findOne(Series, { id: body.seriesId, group: field.group }, { populate: ['group'] });

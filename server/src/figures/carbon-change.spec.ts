@@ -34,9 +34,13 @@ describe('carbonChange()', () => {
     expect(c.value).toBeCloseTo((31 * 86400 * CARBON_MOLAR_MASS) / 1e15, 20);
   });
 
-  it('an inventory change is the anomaly at the end minus the anomaly at the start, converted to Pg C', () => {
-    const inv = { start: '2001-01', values: [1, 5, 3, 7000] };
-    expect(carbonChange(inv, 'Tg C', planCarbonChange('Tg C'), { start: '2001-02', end: '2001-04' }).value).toBeCloseTo((7000 - 5) / 1000, 12);
+  // Issue 14 item 2 changed this rule (it was: anomaly at the end month minus anomaly at the start month, one month short).
+  it('an inventory change runs from the start of the first month to the end of the last (boundaries between monthly means), in Pg C', () => {
+    const inv = { start: '2001-01', values: [1, 5, 3, 7000, 9000] };
+    // Boundaries weighted by the neighbours' lengths (common/src/series/inventory-change.ts): Jan|Feb 31 d, 28 d; Apr|May 30 d, 31 d.
+    const before = (1 * 28 + 5 * 31) / 59;
+    const after = (7000 * 31 + 9000 * 30) / 61;
+    expect(carbonChange(inv, 'Tg C', planCarbonChange('Tg C'), { start: '2001-02', end: '2001-04' }).value).toBeCloseTo((after - before) / 1000, 12);
   });
 
   it('gives null with a warning for a missing month or an event outside the series', () => {
@@ -44,7 +48,7 @@ describe('carbonChange()', () => {
     const plan = planCarbonChange('Pg C/yr');
     expect(carbonChange(gap, 'Pg C/yr', plan, { start: '2001-01', end: '2001-03' })).toMatchObject({ value: null, warning: expect.stringContaining('2001-02') });
     expect(carbonChange(gap, 'Pg C/yr', plan, { start: '2000-06', end: '2001-01' }).value).toBeNull();
-    expect(carbonChange(gap, 'Pg C', planCarbonChange('Pg C'), { start: '2001-01', end: '2001-02' }).warning).toContain('2001-02');
+    expect(carbonChange(gap, 'Pg C', planCarbonChange('Pg C'), { start: '2001-02', end: '2001-02' }).warning).toContain('2001-02');
   });
 
   it('gives null with the unit named when the unit is neither a rate nor an amount of carbon', () => {

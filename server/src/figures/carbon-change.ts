@@ -1,4 +1,4 @@
-import { AnalysisInputError, integrate, parseMonth, parseUnit, unitFactor, UnitError, type CarbonTreatment } from '@upwell/common';
+import { AnalysisInputError, integrate, inventoryChange, parseUnit, unitFactor, UnitError, type CarbonTreatment } from '@upwell/common';
 
 /** How a carbon series' change over an event is found, decided once from its unit. */
 export interface CarbonUnitPlan {
@@ -43,8 +43,10 @@ export interface CarbonChange {
 /**
  * The change of a carbon anomaly over an event's months start..end (inclusive), in Pg C:
  * for a rate, the integral of the anomaly over the event (engine `integrate`: calendar month
- * lengths, "yr" the Julian year of 365.25 d); for an inventory, anomaly at end − anomaly at start.
- * A missing month, or an event outside the series, gives null with a warning.
+ * lengths, "yr" the Julian year of 365.25 d); for an inventory, its change over the same span, from
+ * the start of the first month to the end of the last (engine `inventoryChange`: boundaries
+ * interpolated between the monthly means either side). A missing month, or an event outside the
+ * series, gives null with a warning.
  */
 export function carbonChange(
   anomaly: { start: string; values: ReadonlyArray<number | null> },
@@ -61,11 +63,10 @@ export function carbonChange(
       throw e;
     }
   }
-  const first = parseMonth(anomaly.start);
-  const a = anomaly.values[parseMonth(event.start) - first];
-  const b = anomaly.values[parseMonth(event.end) - first];
-  if (a === undefined || a === null || b === undefined || b === null) {
-    return { value: null, warning: `no inventory anomaly at ${a === undefined || a === null ? event.start : event.end}` };
+  try {
+    return { value: inventoryChange({ series: anomaly, from: event.start, to: event.end }) * plan.toPgC, warning: null };
+  } catch (e) {
+    if (e instanceof AnalysisInputError) return { value: null, warning: e.message };
+    throw e;
   }
-  return { value: (b - a) * plan.toPgC, warning: null };
 }

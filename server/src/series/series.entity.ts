@@ -64,7 +64,7 @@ export class Series {
 @Entity({ tableName: 'series_versions' })
 @Unique({ properties: ['series', 'number'] })
 export class SeriesVersion {
-  [OptionalProps]?: 'createdAt' | 'note' | 'file' | 'transform';
+  [OptionalProps]?: 'createdAt' | 'note' | 'file' | 'transform' | 'calendar';
 
   @PrimaryKey({ type: 'string', length: 36 })
   id: string = randomUUID();
@@ -98,6 +98,10 @@ export class SeriesVersion {
 
   @Property({ type: 'text', default: '' })
   note: string = '';
+
+  /** CF calendar of the months (canonical name, CF 1.11 §4.4.1): month lengths for integrals and day-weighted means. */
+  @Property({ type: 'string', length: 20, default: 'standard' })
+  calendar: string = 'standard';
 
   @ManyToOne(() => User)
   createdBy!: User;

@@ -34,6 +34,7 @@ export function presentVersion(v: SeriesVersion): SeriesVersionView {
     createdBy: presentUser(v.createdBy),
     createdAt: v.createdAt.toISOString(),
     note: v.note,
+    calendar: v.calendar,
   };
 }
 

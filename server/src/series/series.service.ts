@@ -3,6 +3,7 @@ import { Injectable, NotFoundException } from '@nestjs/common';
 import {
   formatMonth,
   isPresent,
+  normalizeCalendar,
   parseMonth,
   type ListSeriesQuery,
   type SeriesDetail,
@@ -30,6 +31,8 @@ export interface NewVersion {
   file: UploadedFile | null;
   transform: SeriesTransform | null;
   note?: string;
+  /** CF calendar of the source (NetCDF time axis, CSV import option); default standard. */
+  calendar?: string;
 }
 
 /** What adding a version did. */
@@ -136,7 +139,8 @@ export class SeriesService {
   addVersion(em: EntityManager, series: Series, user: User, next: NewVersion, latest: SeriesVersion | null): AddedVersion {
     const encoded = encodeValues(next.values);
     const sha = valuesSha256(encoded);
-    if (latest && latest.valuesSha256 === sha && latest.start === next.start) return { series, version: latest, created: false };
+    const calendar = normalizeCalendar(next.calendar);
+    if (latest && latest.valuesSha256 === sha && latest.start === next.start && latest.calendar === calendar) return { series, version: latest, created: false };
     series.latestVersion += 1;
     series.updatedAt = new Date();
     const version = em.create(SeriesVersion, {
@@ -150,6 +154,7 @@ export class SeriesService {
       file: next.file,
       transform: next.transform,
       note: next.note ?? '',
+      calendar,
       createdBy: user,
     });
     return { series, version, created: true };

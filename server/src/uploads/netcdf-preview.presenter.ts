@@ -7,7 +7,12 @@ export function presentNetcdfPreview(d: NetcdfDescription): NetcdfPreview {
   return {
     format: d.format === 'netcdf4' ? 'netcdf4' : 'netcdf-classic',
     calendar: time?.calendar ?? null,
-    timeUnits: null,
+    timeUnits: time?.units ?? null,
+    timeWarnings: time?.stampedAtMonthStarts
+      ? [
+          `every time of ${time.variable} is 00:00 on the first of a month and the axis has no bounds: if each value is a mean of the month before its stamp (an end-of-interval stamp), every month is shifted by one; check the file's documentation`,
+        ]
+      : [],
     globalAttributes: Object.fromEntries(Object.entries(d.globalAttributes).map(([k, v]) => [k, Array.isArray(v) ? v.join(' ') : String(v)])),
     variables: d.candidates.map((c) => ({
       name: c.name,

@@ -104,7 +104,7 @@ export class UploadsService {
       const out: AddedVersion[] = [];
       for (const s of wanted) {
         const target = targets.get(s.column);
-        const version = { start: s.start, values: s.values, file: upload, transform: s.transform };
+        const version = { start: s.start, values: s.values, file: upload, transform: s.transform, calendar: s.calendar };
         if (target) out.push(this.series.addVersion(em, target.series, user, version, target.latest));
         else out.push(this.series.createSeries(em, upload.group, user, { ...s.meta, origin: body.origin }, version));
       }
@@ -190,6 +190,7 @@ export class UploadsService {
         column: s.column,
         start: s.start,
         values: s.values,
+        calendar: (upload.options as CsvImportOptions | null)?.calendar,
         transform: { type: 'csv-column' as const, column: s.column, layout: preview.layout.kind },
         meta: {
           name: s.name,
@@ -219,6 +220,7 @@ export class UploadsService {
         column: c.column,
         start: s.start,
         values: s.values,
+        calendar: s.calendar,
         transform: { type: 'netcdf-variable' as const, variable: c.column },
         meta: {
           name: c.name,

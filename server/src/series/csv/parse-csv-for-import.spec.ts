@@ -187,3 +187,25 @@ describe('parseCsvForImport() options', () => {
     expect(p.series[0].missingCount).toBe(59 * 23);
   });
 });
+
+describe('parseCsvForImport() — model fill values (issue 14 item 8)', () => {
+  // Fill values: netCDF-C default float fill 9.96921e36 and int16 fill −32767 (netCDF-C docs, NC_FILL_FLOAT /
+  // NC_FILL_SHORT [memory]); −1e34 and 1e20 written by some models (common practice).
+  it('warns about a column holding fill-like values, naming them and how to treat them as missing', async () => {
+    const p = await parseCsvForImport('date,dic,flux\n1997-01,2.1,1e20\n1997-02,9.96921e36,0.3\n1997-03,2.2,-1e34\n1997-04,-32767,0.2\n');
+    const byColumn = Object.fromEntries(p.warnings.filter((w) => w.code === 'fill-value').map((w) => [w.column, w.message]));
+    expect(byColumn.dic).toContain('2 values');
+    expect(byColumn.dic).toContain('9.96921e+36');
+    expect(byColumn.dic).toContain('-32767');
+    expect(byColumn.flux).toContain('sentinels');
+    expect(byColumn.flux).toContain('-1e+34');
+  });
+
+  it('says nothing for ordinary values, and the sentinels option turns the fill values into missing months', async () => {
+    const text = 'date,dic\n1997-01,2.1\n1997-02,9.96921e36\n1997-03,2.2\n';
+    expect((await parseCsvForImport('date,x\n1997-01,1e14\n1997-02,-32766\n')).warnings.some((w) => w.code === 'fill-value')).toBe(false);
+    const cleaned = await parseCsvForImport(text, { sentinels: [9.96921e36] });
+    expect(cleaned.warnings.some((w) => w.code === 'fill-value')).toBe(false);
+    expect(cleaned.series[0].values).toEqual([2.1, null, 2.2]);
+  });
+});

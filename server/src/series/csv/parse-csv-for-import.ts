@@ -1,3 +1,4 @@
+import { fillValuesIn } from './fill-values';
 import type { Readable } from 'node:stream';
 import {
   DEFAULT_MISSING_MARKERS,
@@ -193,6 +194,15 @@ function candidates(collected: CollectedSeries[], plan: LayoutPlan, names: strin
     let last = s.values.length - 1;
     while (s.values[last] === null) last -= 1;
     const values = s.values.slice(first, last + 1);
+    const fills = fillValuesIn(values);
+    if (fills.count > 0) {
+      warnings.add(
+        'fill-value',
+        `holds ${fills.count} value${fills.count === 1 ? '' : 's'} that look${fills.count === 1 ? 's' : ''} like model fill values (${fills.distinct.join(', ')}); ` +
+          `to treat them as missing, upload again with these among the missing-value sentinels (options.sentinels: ${JSON.stringify(fills.distinct)})`,
+        { column },
+      );
+    }
     const suggestion = plan.kind === 'wide' ? { name: suggestFromFileName(fileName) } : suggestFromHeader(column);
     out.push({
       column,

@@ -15,7 +15,7 @@ async function describeFile(name: string) {
 describe('describeNetcdf()', () => {
   it('lists 1-D time variables as series with units, names, months and missing count', async () => {
     const d = await describeFile('series-netcdf4.nc');
-    expect(d.time).toEqual({ variable: 'time', start: '2000-01', end: '2001-12', months: 24, calendar: 'standard', fromBounds: true });
+    expect(d.time).toEqual({ variable: 'time', units: 'days since 1950-01-01', start: '2000-01', end: '2001-12', months: 24, calendar: 'standard', fromBounds: true, stampedAtMonthStarts: false });
     const byName = Object.fromEntries(d.candidates.map((c) => [c.name, c]));
     expect(byName.enso_index).toMatchObject({ kind: 'series', units: 'K', longName: 'fictional ENSO index', start: '2000-01', end: '2001-12', months: 24, missing: 1 });
     expect(byName.dic_inventory).toMatchObject({ kind: 'series', units: 'PgC', standardName: 'ocean_mass_content_of_dissolved_inorganic_carbon', missing: 0 });

@@ -1,4 +1,4 @@
-import { monthKey } from '@upwell/common';
+import { monthKey, stampedAtMonthStarts } from '@upwell/common';
 import { stringAttribute } from './attributes';
 import { createCfDecoder } from './cf-decoder';
 import { findCoordinates, type Coordinate } from './coordinates';
@@ -53,7 +53,7 @@ export interface NetcdfDescription {
   dimensions: NcDimension[];
   coordinates: Coordinate[];
   /** The monthly time axis, or why there is none. */
-  time: { variable: string; start: string; end: string; months: number; calendar: string; fromBounds: boolean } | { problem: string };
+  time: { variable: string; units: string; start: string; end: string; months: number; calendar: string; fromBounds: boolean; stampedAtMonthStarts: boolean } | { problem: string };
   candidates: ImportCandidate[];
   notes: string[];
 }
@@ -116,7 +116,9 @@ export function describeNetcdf(file: NetcdfFile): NetcdfDescription {
     globalAttributes: file.globalAttributes,
     dimensions: [...file.dimensions],
     coordinates,
-    time: monthly && span ? { variable: monthly.variable, ...span, calendar: monthly.calendar, fromBounds: monthly.fromBounds } : { problem: timeProblem },
+    time: monthly && span
+      ? { variable: monthly.variable, units: monthly.units, ...span, calendar: monthly.calendar, fromBounds: monthly.fromBounds, stampedAtMonthStarts: !monthly.fromBounds && stampedAtMonthStarts(monthly.times) }
+      : { problem: timeProblem },
     candidates,
     notes: [...file.notes, ...notes],
   };

@@ -23,6 +23,8 @@ export interface ImportedSeries {
   gaps: string[];
   /** How the values were decoded and the time read, for provenance. */
   notes: string[];
+  /** CF calendar of the time axis (canonical name). */
+  calendar: string;
 }
 
 /**
@@ -61,6 +63,7 @@ export function importSeries(file: NetcdfFile, name: string, options: { allowGap
     attributes: v.attributes,
     missing: values.length - present,
     gaps: monthly.axis.gaps,
+    calendar: monthly.calendar,
     notes: [
       ...notes,
       ...decoder.steps.map((s) => `decoded with ${s}`),

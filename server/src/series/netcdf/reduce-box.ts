@@ -25,6 +25,8 @@ export interface BoxReduction {
   coverage: (number | null)[];
   /** Units of the values: the variable's for a mean; its units times m² or m³ for an integral. */
   units: string | null;
+  /** CF calendar of the time axis (canonical name). */
+  calendar: string;
   provenance: ReductionProvenance;
 }
 
@@ -97,6 +99,7 @@ export function reduceBox(file: NetcdfFile, name: string, options: BoxReductionO
     start: monthly.axis.start,
     values,
     coverage,
+    calendar: monthly.calendar,
     units: method === 'mean' ? units : `${units ?? '1'} ${depth ? 'm3' : 'm2'}`,
     provenance: {
       variable: name,
