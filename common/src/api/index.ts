@@ -19,3 +19,4 @@ export * from './demo';
 // E-mail and invitations.
 export * from './invitations';
 export * from './mail';
+export * from './maps';
