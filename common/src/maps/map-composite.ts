@@ -18,7 +18,7 @@ export function mapComposite(source: MapFieldSource, req: MapRequest, w: MapWind
   const months = compositeMonths(req.events, phase, req.offsets ?? [0]);
   if (months.events === 0) throw new AnalysisInputError(`the event set has no ${phase} event`);
   const buffer = new Float64Array(source.cells);
-  const anomaly = new Float64Array(source.cells);
+  const anomaly = buffer; // anomalies in place: one slice buffer in all
   const clim = baseClimatology(source, w.baseFrom, w.baseTo, req.minYears, buffer);
   const acc = compositeMap(source.cells);
   let eventMonths = 0;
