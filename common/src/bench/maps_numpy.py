@@ -67,8 +67,10 @@ def work():
 with np.errstate(invalid='ignore', divide='ignore'):
     work()
     times = []
+    cpu = []
     for _ in range(5):
-        t0 = time.perf_counter()
+        t0, c0 = time.perf_counter(), time.process_time()
         work()
         times.append((time.perf_counter() - t0) * 1e3)
-print(json.dumps({'bestMs': min(times), 'scipy': betainc is not None}))
+        cpu.append((time.process_time() - c0) * 1e3)
+print(json.dumps({'bestMs': min(times), 'bestCpuMs': min(cpu), 'scipy': betainc is not None}))

@@ -132,5 +132,5 @@ if (require.main === module) {
   const maps = require('./maps') as typeof import('./maps');
   console.log(formatBench(runBench(maps.MAPS_BENCH_CASES, 3, 1)));
   const numpy = maps.numpyCorrelationMapMs();
-  console.log('unavailable' in numpy ? `numpy correlation map, same field: unavailable — ${numpy.unavailable}` : `numpy correlation map, same field and work, vectorised over cells: best ${numpy.ms.toFixed(2)} ms`);
+  console.log('unavailable' in numpy ? `numpy correlation map, same field: unavailable — ${numpy.unavailable}` : `numpy correlation map, same field and work, vectorised over cells: best ${numpy.ms.toFixed(2)} ms (CPU ${numpy.cpuMs.toFixed(2)} ms)`);
 }
