@@ -159,6 +159,7 @@ export const ROUTE_RULES: Record<string, RouteRule> = {
   'GET /api/groups/{groupId}/fields': { scope: 'group', action: 'view' },
   'GET /api/zonal-fields/{fieldId}': { scope: 'group', action: 'view' },
   'POST /api/fields/{fieldId}/reductions': { scope: 'group', action: 'upload-series', body: () => ({ kind: 'zonal-mean', name: 'Zonal mean', lon: [0, 360] }) },
+  'POST /api/fields/{fieldId}/maps': { scope: 'group', action: 'view', body: () => ({ mode: 'mean' }) },
   'POST /api/notebooks/{notebookId}/figures': {
     scope: 'notebook', action: 'read', lagFields: ['recipe.maxLag'],
     body: (w) => ({ recipe: { kind: 'lag-correlation', index: series(w), series: series(w), maxLag: 6 } }),

@@ -21,3 +21,4 @@ export * from './invitations';
 export * from './mail';
 // The one rule for request text (issue 23).
 export * from './text';
+export * from './maps';

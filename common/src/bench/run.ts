@@ -140,4 +140,10 @@ export function formatBench(results: BenchResult[]): string {
 
 if (require.main === module) {
   console.log(formatBench(runBench()));
+  // Maps: heavier cases, fewer runs; numpy's time for the 1° correlation map measured in the same run.
+  // eslint-disable-next-line @typescript-eslint/no-require-imports
+  const maps = require('./maps') as typeof import('./maps');
+  console.log(formatBench(runBench(maps.MAPS_BENCH_CASES, 3, 1)));
+  const numpy = maps.numpyCorrelationMapMs();
+  console.log('unavailable' in numpy ? `numpy correlation map, same field: unavailable — ${numpy.unavailable}` : `numpy correlation map, same field and work, vectorised over cells: best ${numpy.ms.toFixed(2)} ms (CPU ${numpy.cpuMs.toFixed(2)} ms)`);
 }
