@@ -1,0 +1,106 @@
+import { regionsFromFlags } from '@upwell/common';
+import { readFileSync } from 'node:fs';
+import { resolve } from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { openNetcdf } from '../../series/netcdf/open-netcdf';
+import type { NetcdfFile } from '../../series/netcdf/types';
+import { readNativeHorizontalGrid } from './native-horizontal-grid';
+import { integrateNativeRegions } from './native-region-integrals';
+import { readNativeThickness } from './native-thickness';
+
+// Fixtures and reference values: common/test-fixtures/scripts/grids_reference.py (netCDF4-python writes, xarray integrates).
+const grids = (name: string) => resolve(__dirname, '../../../../common/test-fixtures/grids', name);
+// The JSON read directly: the server's compilation root stops at server/src (shape: common/test-fixtures/grids-reference.ts).
+const ref = JSON.parse(readFileSync(grids('grids_reference.json'), 'utf8')) as {
+  nt: number;
+  band_area_m2: number;
+  grid: { lat: number[]; thkcello: number[] };
+  regions: Record<string, { fgco2_integral_mol_s: number[]; full_depth_mol_s: Record<string, number[]>; top_100m_mol_s: Record<string, number[]>; inventory_full_mol: number[]; inventory_0_100m_mol: number[] }>;
+};
+const TERMS = ['dic_tend', 'dic_adv', 'dic_dif', 'dic_bio', 'dic_airsea', 'dic_other'];
+
+describe('native-grid reading (rotated-pole fixture)', () => {
+  let budget: NetcdfFile;
+  let regionsFile: NetcdfFile;
+  beforeAll(async () => {
+    budget = await openNetcdf(grids('grids_budget.nc'));
+    regionsFile = await openNetcdf(grids('grids_regions.nc'));
+  });
+  afterAll(() => {
+    budget.close();
+    regionsFile.close();
+  });
+
+  it('finds 2-D lat/lon through the coordinates attribute and the areas through cell_measures', () => {
+    const g = readNativeHorizontalGrid(budget, 'dic_tend');
+    expect(g.dims).toEqual(['y', 'x']);
+    expect(g.latVariable).toBe('lat');
+    expect(g.areaVariable).toBe('areacello');
+    expect(g.volumeVariable).toBe('volcello');
+    expect(Array.from(g.lat.subarray(0, 5))).toEqual(ref.grid.lat.slice(0, 5));
+    expect(g.areas.reduce((s, a) => s + a, 0) / ref.band_area_m2).toBeCloseTo(1, 12);
+  });
+
+  it('takes thkcello as the cell thickness of a 3-D variable', () => {
+    const g = readNativeHorizontalGrid(budget, 'dic_tend');
+    const t = readNativeThickness(budget, 'dic_tend', g);
+    expect(t.source).toBe('thkcello');
+    expect(Array.from(t.thickness)).toEqual(ref.grid.thkcello);
+  });
+
+  it('integrates every budget term per region, 0–100 m and full depth, as xarray weighted(volume).sum() does', () => {
+    const g = readNativeHorizontalGrid(budget, 'dic_tend');
+    const t = readNativeThickness(budget, 'dic_tend', g);
+    const codes = Float64Array.from(regionsFile.read('basin'));
+    const regions = regionsFromFlags(codes, [1, 2, 3], 'tropical_pacific northern_band rest_of_ocean');
+    for (const term of [...TERMS, 'dissic']) {
+      const got = integrateNativeRegions(budget, term, g, t, regions, [100, null]);
+      for (const s of got) {
+        const r = ref.regions[s.region];
+        const expected = term === 'dissic' ? (s.depthLimit === null ? r.inventory_full_mol : r.inventory_0_100m_mol) : (s.depthLimit === null ? r.full_depth_mol_s : r.top_100m_mol_s)[term];
+        const scale = Math.max(...expected.map(Math.abs));
+        for (let i = 0; i < ref.nt; i++) expect(Math.abs(s.values[i] - expected[i]) / scale, `${term} ${s.region} ${s.depthLimit}`).toBeLessThan(1e-12);
+      }
+    }
+  });
+
+  it('integrates a (time, y, x) flux over area', () => {
+    const g = readNativeHorizontalGrid(budget, 'fgco2');
+    const codes = Float64Array.from(regionsFile.read('basin'));
+    const regions = regionsFromFlags(codes, [1, 2, 3], 'tropical_pacific northern_band rest_of_ocean');
+    for (const s of integrateNativeRegions(budget, 'fgco2', g, null, regions, [100, null])) {
+      const expected = ref.regions[s.region].fgco2_integral_mol_s;
+      for (let i = 0; i < ref.nt; i++) expect(s.values[i] / expected[i]).toBeCloseTo(1, 12);
+    }
+  });
+
+  it('refuses a curvilinear field without cell measures, naming what to add', async () => {
+    const f = await openNetcdf(grids('grids_no_areas.nc'));
+    try {
+      expect(() => readNativeHorizontalGrid(f, 'fgco2')).toThrow(/names no cell areas: add the model's cell-area variable in m2 \(e\.g\. areacello/);
+    } finally {
+      f.close();
+    }
+  });
+
+  it('refuses a vertical axis without bounds or thickness, naming lev_bnds and thkcello', async () => {
+    const f = await openNetcdf(grids('grids_no_bounds.nc'));
+    try {
+      const g = readNativeHorizontalGrid(f, 'dissic');
+      expect(() => readNativeThickness(f, 'dissic', g)).toThrow(/axis lev of dissic has no bounds .* add lev_bnds or thkcello/);
+    } finally {
+      f.close();
+    }
+  });
+
+  it('reads lev_bnds in centimeters with partial bottom cells cut at deptho when no thkcello is given', async () => {
+    const g = readNativeHorizontalGrid(budget, 'dic_tend');
+    // the same file seen without its thkcello and volcello: bounds (cm) + deptho must give the same thicknesses
+    const hidden: NetcdfFile = Object.create(budget, {
+      variables: { value: budget.variables.filter((x) => x.name !== 'thkcello' && x.name !== 'volcello') },
+    });
+    const t = readNativeThickness(hidden, 'dic_tend', { ...g, volumeVariable: null });
+    expect(t.source).toMatch(/lev_bnds \(centimeters, positive down\) cut at deptho/);
+    for (let i = 0; i < t.thickness.length; i++) expect(t.thickness[i]).toBeCloseTo(ref.grid.thkcello[i], 9);
+  });
+});
