@@ -19,3 +19,5 @@ export * from './demo';
 // E-mail and invitations.
 export * from './invitations';
 export * from './mail';
+// Regions on native grids and regional budgets.
+export * from './regions';

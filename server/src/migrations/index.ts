@@ -6,6 +6,7 @@ import { Migration20261201200734 } from './Migration20261201200734';
 import { Migration20261201201010 } from './Migration20261201201010';
 import { Migration20261201214631 } from './Migration20261201214631';
 import { Migration20261201220000 } from './Migration20261201220000';
+import { Migration20261204181500 } from './Migration20261204181500';
 
 /**
  * Every migration, oldest first. Create one with `npm run migration:create -w server`
@@ -26,4 +27,6 @@ export const migrationsList: MigrationObject[] = [
   { name: 'Migration20261201214631', class: Migration20261201214631 },
   // Invitations by e-mail, and each person's notification-mail setting.
   { name: 'Migration20261201220000', class: Migration20261201220000 },
+  // Region sets on native model grids (masks, polygons, standard boxes) with versions.
+  { name: 'Migration20261204181500', class: Migration20261204181500 },
 ];
