@@ -12,6 +12,7 @@ Files written to common/test-fixtures/grids/:
   grids_regions.nc    an integer region mask on the same grid (flag_values/flag_meanings)
   grids_no_areas.nc   a field on 2-D coordinates with no cell_measures (must be refused)
   grids_mismatch.nc   a region mask on a grid of another shape (must be refused)
+  grids_tiny_budget.nc  a 4 x 6 cut of grids_budget.nc over 2 months (the route walk's upload)
   grids_no_bounds.nc  a 3-D field whose vertical axis has no bounds and no thickness variable (must be refused)
   grids_reference.json  the grid as JSON arrays (for engine tests) and the reference integrals from xarray
 
@@ -238,6 +239,23 @@ write_regions(os.path.join(OUT, 'grids_regions.nc'))
 write_regions(os.path.join(OUT, 'grids_mismatch.nc'), NY - 1, NX, codes[:-1])
 write_no_areas(os.path.join(OUT, 'grids_no_areas.nc'))
 write_no_bounds(os.path.join(OUT, 'grids_no_bounds.nc'))
+
+
+def write_tiny(src, path, keep):
+    """A small cut of a file (the route walk uploads one per world): every variable sliced on y, x and time."""
+    with Dataset(src) as a, Dataset(path, 'w', format='NETCDF4') as b:
+        b.setncatts({k: a.getncattr(k) for k in a.ncattrs()})
+        for name, d in a.dimensions.items():
+            size = len(range(*keep[name].indices(len(d)))) if name in keep else len(d)
+            b.createDimension(name, None if d.isunlimited() else size)
+        for name, v in a.variables.items():
+            fill = v.getncattr('_FillValue') if '_FillValue' in v.ncattrs() else None
+            w = b.createVariable(name, v.dtype, v.dimensions, fill_value=fill)
+            w.setncatts({k: v.getncattr(k) for k in v.ncattrs() if k != '_FillValue'})
+            w[:] = v[tuple(keep.get(dim, slice(None)) for dim in v.dimensions)]
+
+
+write_tiny(os.path.join(OUT, 'grids_budget.nc'), os.path.join(OUT, 'grids_tiny_budget.nc'), {'y': slice(8, 12), 'x': slice(0, 6), 'time': slice(0, 2)})
 
 # ---- reference values, computed with xarray from the files just written ----
 ds = xr.open_dataset(os.path.join(OUT, 'grids_budget.nc'), decode_times=False)
