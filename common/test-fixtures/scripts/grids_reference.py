@@ -12,7 +12,7 @@ Files written to common/test-fixtures/grids/:
   grids_regions.nc    an integer region mask on the same grid (flag_values/flag_meanings)
   grids_no_areas.nc   a field on 2-D coordinates with no cell_measures (must be refused)
   grids_mismatch.nc   a region mask on a grid of another shape (must be refused)
-  grids_tiny_budget.nc  a 4 x 6 cut of grids_budget.nc over 2 months (the route walk's upload)
+  grids_tiny_budget.nc  a 4 x 6 cut of grids_budget.nc over 2 months, NetCDF-3 (the route walk's upload)
   grids_no_bounds.nc  a 3-D field whose vertical axis has no bounds and no thickness variable (must be refused)
   grids_reference.json  the grid as JSON arrays (for engine tests) and the reference integrals from xarray
 
@@ -243,7 +243,7 @@ write_no_bounds(os.path.join(OUT, 'grids_no_bounds.nc'))
 
 def write_tiny(src, path, keep):
     """A small cut of a file (the route walk uploads one per world): every variable sliced on y, x and time."""
-    with Dataset(src) as a, Dataset(path, 'w', format='NETCDF4') as b:
+    with Dataset(src) as a, Dataset(path, 'w', format='NETCDF3_64BIT_OFFSET') as b:
         b.setncatts({k: a.getncattr(k) for k in a.ncattrs()})
         for name, d in a.dimensions.items():
             size = len(range(*keep[name].indices(len(d)))) if name in keep else len(d)

@@ -77,7 +77,7 @@ describe('native-grid reading (rotated-pole fixture)', () => {
   it('refuses a curvilinear field without cell measures, naming what to add', async () => {
     const f = await openNetcdf(grids('grids_no_areas.nc'));
     try {
-      expect(() => readNativeHorizontalGrid(f, 'fgco2')).toThrow(/names no cell areas: add the model's cell-area variable in m2 \(e\.g\. areacello/);
+      expect(() => readNativeHorizontalGrid(f, 'fgco2')).toThrow(/fgco2 names no cell areas: add the model's cell-area variable in m2 \(e\.g\. areacello/);
     } finally {
       f.close();
     }
@@ -102,5 +102,36 @@ describe('native-grid reading (rotated-pole fixture)', () => {
     const t = readNativeThickness(hidden, 'dic_tend', { ...g, volumeVariable: null });
     expect(t.source).toMatch(/lev_bnds \(centimeters, positive down\) cut at deptho/);
     for (let i = 0; i < t.thickness.length; i++) expect(t.thickness[i]).toBeCloseTo(ref.grid.thkcello[i], 9);
+  });
+
+  it('names the area variable of the file that would do, and refuses areas in other units or on another grid', () => {
+    const withAttributes = (name: string, change: (a: Record<string, unknown>) => Record<string, unknown>): NetcdfFile => {
+      const variables = budget.variables.map((x) => (x.name === name ? { ...x, attributes: change({ ...x.attributes }) } : x));
+      return Object.create(budget, { variables: { value: variables }, variable: { value: (n: string) => variables.find((x) => x.name === n)! } });
+    };
+    const noMeasures = withAttributes('fgco2', ({ cell_measures: _drop, ...rest }) => rest);
+    expect(() => readNativeHorizontalGrid(noMeasures, 'fgco2')).toThrow(/areacello in this file would do: set fgco2:cell_measures = "area: areacello"/);
+    const km = withAttributes('areacello', (a) => ({ ...a, units: 'km' }));
+    expect(() => readNativeHorizontalGrid(km, 'fgco2')).toThrow(/cell areas areacello have units "km", not an area; expected m2/);
+    const elsewhere = withAttributes('fgco2', (a) => ({ ...a, cell_measures: 'area: thkcello' }));
+    expect(() => readNativeHorizontalGrid(elsewhere, 'fgco2')).toThrow(/cell areas thkcello are on \(lev, y, x\)/);
+    const absent = withAttributes('fgco2', (a) => ({ ...a, cell_measures: 'area: areacella' }));
+    expect(() => readNativeHorizontalGrid(absent, 'fgco2')).toThrow(/names areacella, which is not in this file/);
+  });
+
+  it('reads a regular grid (1-D lat and lon coordinate variables) with its cell_measures, expanding the centres per cell', () => {
+    const v = (name: string, dims: string[], shape: number[], attributes: Record<string, string>) => ({ name, dims, shape, dtype: 'float64' as const, attributes });
+    const data: Record<string, Float64Array> = { lat: Float64Array.of(-5, 5), lon: Float64Array.of(10, 20, 30), area: Float64Array.of(1, 2, 3, 4, 5, 6) };
+    const variables = [
+      v('lat', ['lat'], [2], { units: 'degrees_north' }),
+      v('lon', ['lon'], [3], { units: 'degrees_east' }),
+      v('area', ['lat', 'lon'], [2, 3], { units: 'm2' }),
+      v('flux', ['time', 'lat', 'lon'], [1, 2, 3], { cell_measures: 'area: area' }),
+    ];
+    const fake = { variables, variable: (name: string) => variables.find((x) => x.name === name)!, read: (name: string) => data[name] } as unknown as NetcdfFile;
+    const g = readNativeHorizontalGrid(fake, 'flux');
+    expect(Array.from(g.lat)).toEqual([-5, -5, -5, 5, 5, 5]);
+    expect(Array.from(g.lon)).toEqual([10, 20, 30, 10, 20, 30]);
+    expect(Array.from(g.areas)).toEqual([1, 2, 3, 4, 5, 6]);
   });
 });

@@ -47,12 +47,21 @@ export function readNativeHorizontalGrid(file: NetcdfFile, variableName: string)
     candidates.find((c) => coordinateRole(c)?.role === role) ?? candidates.find((c) => names.includes(c.name.toLowerCase()));
   const latVar = pick('latitude', LAT_NAMES);
   const lonVar = pick('longitude', LON_NAMES);
+  const regular = !latVar || !lonVar ? regularCentres(file, dims) : null;
+  if (regular) return { dims, shape, ...regular, ...readAreas(file, v, dims, shape, onGrid) };
   if (!latVar || !lonVar) {
     throw new NetcdfImportError('bad-coordinates', v.name, `${v.name} has no 2-D ${!latVar ? 'latitude' : 'longitude'} on its dimensions (${dims.join(', ')}): name it in the variable's coordinates attribute (CF 1.11 §5.2), with units degrees_north / degrees_east`);
   }
   const lat = decodedCopy(file.read(latVar.name), createCfDecoder(latVar)).values;
   const lon = decodedCopy(file.read(lonVar.name), createCfDecoder(lonVar)).values;
+  return { dims, shape, latVariable: latVar.name, lonVariable: lonVar.name, lat, lon, ...readAreas(file, v, dims, shape, onGrid) };
+}
 
+/**
+ * The areas named by a variable's cell_measures, in m². Also on a regular grid the model's own
+ * areas are what its budget closes with, so they are required there too.
+ */
+function readAreas(file: NetcdfFile, v: NcVariable, dims: [string, string], shape: [number, number], onGrid: (c: NcVariable) => boolean): Pick<NativeHorizontalGrid, 'areaVariable' | 'areas' | 'volumeVariable'> {
   const measures = parseCellMeasures(stringAttribute(v.attributes, 'cell_measures'));
   const areaName = measures.area;
   if (!areaName) {
@@ -61,8 +70,8 @@ export function readNativeHorizontalGrid(file: NetcdfFile, variableName: string)
       'bad-coordinates',
       `${v.name}:cell_measures`,
       would
-        ? `${v.name} lies on a curvilinear grid and names no cell areas; ${would.name} in this file would do: set ${v.name}:cell_measures = "area: ${would.name}" (CF 1.11 §7.2). Areas are not derived from cell centres on such a grid`
-        : `${v.name} lies on a curvilinear grid and names no cell areas: add the model's cell-area variable in m2 (e.g. areacello, standard_name cell_area) and cell_measures = "area: areacello" (CF 1.11 §7.2). Areas are not derived from cell centres on such a grid`,
+        ? `${v.name} names no cell areas; ${would.name} in this file would do: set ${v.name}:cell_measures = "area: ${would.name}" (CF 1.11 §7.2). Areas are not derived from cell centres on a model grid`
+        : `${v.name} names no cell areas: add the model's cell-area variable in m2 (e.g. areacello, standard_name cell_area) and cell_measures = "area: areacello" (CF 1.11 §7.2). Areas are not derived from cell centres on a model grid`,
     );
   }
   const areaVar = file.variables.find((c) => c.name === areaName);
@@ -73,7 +82,23 @@ export function readNativeHorizontalGrid(file: NetcdfFile, variableName: string)
   if (factor === undefined) throw new NetcdfImportError('bad-coordinates', `${areaVar.name}:units`, `cell areas ${areaVar.name} have units "${unit}", not an area; expected m2`);
   const areas = decodedCopy(file.read(areaVar.name), createCfDecoder(areaVar)).values;
   for (let i = 0; i < areas.length; i++) areas[i] = areas[i] > 0 ? areas[i] * factor : 0;
-  return { dims, shape, latVariable: latVar.name, lonVariable: lonVar.name, lat, lon, areaVariable: areaVar.name, areas, volumeVariable: measures.volume ?? null };
+  return { areaVariable: areaVar.name, areas, volumeVariable: measures.volume ?? null };
+}
+
+/** Centres of a regular grid (1-D latitude and longitude coordinate variables of the two dimensions), expanded to one per cell. */
+function regularCentres(file: NetcdfFile, dims: [string, string]): Pick<NativeHorizontalGrid, 'lat' | 'lon' | 'latVariable' | 'lonVariable'> | null {
+  const y = file.variables.find((c) => c.name === dims[0] && c.dims.length === 1 && coordinateRole(c)?.role === 'latitude');
+  const x = file.variables.find((c) => c.name === dims[1] && c.dims.length === 1 && coordinateRole(c)?.role === 'longitude');
+  if (!y || !x) return null;
+  const ys = decodedCopy(file.read(y.name), createCfDecoder(y)).values;
+  const xs = decodedCopy(file.read(x.name), createCfDecoder(x)).values;
+  const lat = new Float64Array(ys.length * xs.length);
+  const lon = new Float64Array(ys.length * xs.length);
+  for (let i = 0; i < ys.length; i++) {
+    lat.fill(ys[i], i * xs.length, (i + 1) * xs.length);
+    lon.set(xs, i * xs.length);
+  }
+  return { lat, lon, latVariable: y.name, lonVariable: x.name };
 }
 
 /** `cell_measures = "area: areacello volume: volcello"` as { area, volume } (CF 1.11 §7.2). */
