@@ -134,4 +134,11 @@ describe('native-grid reading (rotated-pole fixture)', () => {
     expect(Array.from(g.lon)).toEqual([10, 20, 30, 10, 20, 30]);
     expect(Array.from(g.areas)).toEqual([1, 2, 3, 4, 5, 6]);
   });
+
+  it('refuses a thickness that varies in time rather than fall back to static bounds', () => {
+    const g = readNativeHorizontalGrid(budget, 'dic_tend');
+    const variables = budget.variables.map((x) => (x.name === 'thkcello' ? { ...x, dims: ['time', ...x.dims], shape: [3, ...x.shape] } : x));
+    const moving: NetcdfFile = Object.create(budget, { variables: { value: variables }, variable: { value: (n: string) => variables.find((x) => x.name === n)! } });
+    expect(() => readNativeThickness(moving, 'dic_tend', g)).toThrow(/thkcello varies in time \(time, lev, y, x\)/);
+  });
 });

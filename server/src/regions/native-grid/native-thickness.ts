@@ -2,7 +2,7 @@ import { layersFromBounds, partialBottomThickness } from '@upwell/common';
 import { stringAttribute } from '../../series/netcdf/attributes';
 import { createCfDecoder, decodedCopy } from '../../series/netcdf/cf-decoder';
 import { NetcdfImportError } from '../../series/netcdf/netcdf-import-error';
-import type { NetcdfFile } from '../../series/netcdf/types';
+import type { NcVariable, NetcdfFile } from '../../series/netcdf/types';
 import type { NativeHorizontalGrid } from './native-horizontal-grid';
 
 /** Cell thicknesses of a 3-D variable on its native grid, and where they came from. */
@@ -41,7 +41,11 @@ export function readNativeThickness(file: NetcdfFile, variableName: string, grid
   };
   const read = (name: string) => decodedCopy(file.read(name), createCfDecoder(file.variable(name))).values;
 
-  const thk = file.variables.find((x) => onCells(x.name) && (stringAttribute(x.attributes, 'standard_name') === 'cell_thickness' || x.name === 'thkcello'));
+  const isThickness = (x: NcVariable) => stringAttribute(x.attributes, 'standard_name') === 'cell_thickness' || x.name === 'thkcello';
+  // A thickness that changes in time (z* or layered models) must not be replaced by static bounds without a word.
+  const moving = file.variables.find((x) => isThickness(x) && x.dims.length === 4 && x.dims[1] === dim);
+  if (moving) throw new NetcdfImportError('unsupported', moving.name, `${moving.name} varies in time (${moving.dims.join(', ')}); time-varying cell thickness is not read yet: give a time-invariant thkcello (lev, y, x) or the time-mean thickness`);
+  const thk = file.variables.find((x) => onCells(x.name) && isThickness(x));
   if (thk) {
     const f = metres(thk.name);
     return { dim, levels, thickness: read(thk.name).map((h) => (h > 0 ? h * f : 0)), source: thk.name };
