@@ -87,3 +87,16 @@ export * from './maps/benjamini-hochberg';
 export * from './maps/field-significance';
 export * from './maps/pattern-statistics';
 export * from './maps/compute-map';
+// Regions on native grids: explicit cell measures, masks, depth ranges, budgets
+export * from './regions/region-integral';
+export * from './regions/volume-integral';
+export * from './regions/vertical-length-unit';
+export * from './regions/layer-thickness';
+export * from './regions/partial-bottom-thickness';
+export * from './regions/thickness-within-depth';
+export * from './regions/point-in-polygon';
+export * from './regions/polygon-mask';
+export * from './regions/standard-boxes';
+export * from './regions/box-mask';
+export * from './regions/regions-from-flags';
+export * from './regions/regional-budget';

@@ -17,6 +17,7 @@ import { SeriesModule } from './series/series.module';
 import { UploadsModule } from './uploads/uploads.module';
 import { FieldsModule } from './fields/fields.module';
 import { JobsModule } from './jobs/jobs.module';
+import { RegionsModule } from './regions/regions.module';
 import { FiguresModule } from './figures/figures.module';
 import { EventSetsModule } from './event-sets/event-sets.module';
 import { CollaborationModule } from './collaboration/collaboration.module';
@@ -72,6 +73,8 @@ export class AppModule {
         // E-mail and invitations.
         MailModule,
         InvitationsModule,
+        // Region sets and regional budgets on native model grids.
+        RegionsModule,
       ],
       controllers: [HealthController],
       providers: [MigrateOnStart],

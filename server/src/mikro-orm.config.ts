@@ -7,6 +7,7 @@ import { Notebook, NotebookRoleAssignment } from './notebooks/notebook.entity';
 import { Series, SeriesVersion } from './series/series.entity';
 import { UploadedFile } from './uploads/uploaded-file.entity';
 import { GriddedField, ZonalMeanField } from './fields/field.entity';
+import { RegionSet, RegionSetVersion } from './regions/region-set.entity';
 import { NotebookDocument, NotebookUpdate } from './documents/notebook-document.entity';
 import { EventSet } from './event-sets/event-set.entity';
 import { Checkpoint } from './checkpoints/checkpoint.entity';
@@ -21,7 +22,9 @@ export const ENTITIES = [User, Group, GroupMembership, Notebook, NotebookRoleAss
   // Snapshots
   Snapshot, ShareLink,
   // E-mail invitations
-  Invitation];
+  Invitation,
+  // Region sets on native model grids
+  RegionSet, RegionSetVersion];
 
 /**
  * MikroORM's logger with parameter logging locked off: should query logging

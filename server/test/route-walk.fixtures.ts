@@ -1,4 +1,5 @@
 import { readFileSync } from 'node:fs';
+import { join } from 'node:path';
 import request from 'supertest';
 import * as Y from 'yjs';
 import { DOCUMENT_FIELD, type GroupAction, type NotebookAction } from '@upwell/common';
@@ -57,6 +58,9 @@ export interface World {
   notebookInvitationId: string;
   invitationToken: string;
   messageId: string;
+  /** A region set (one polygon over the globe) and an upload of native-grid budget terms (grids_tiny_budget.nc). */
+  regionSetId: string;
+  budgetUploadId: string;
 }
 
 /** Path parameter name → the id of group A's thing it names. */
@@ -79,6 +83,7 @@ export const PARAM_FIXTURES: Record<string, (w: World, path: string, p: People) 
   token: (w, path) => (path.startsWith('/api/invitations/') ? w.invitationToken : w.shareToken),
   invitationId: (w, path) => (path.startsWith('/api/groups/') ? w.groupInvitationId : w.notebookInvitationId),
   messageId: (w) => w.messageId,
+  regionSetId: (w) => w.regionSetId,
 };
 
 /**
@@ -205,6 +210,16 @@ export const ROUTE_RULES: Record<string, RouteRule> = {
   'GET /api/demo': { scope: 'public', openStatus: 404 },
   // E-mail and invitations (issue 7): admins invite to the group, the lead author to the notebook; the token is the credential.
   'GET /api/mail/status': { scope: 'self' },
+  // Region sets and regional budgets on native grids (issue 16): group members read, those who may upload series make.
+  'GET /api/groups/{groupId}/region-sets': { scope: 'group', action: 'view' },
+  'POST /api/groups/{groupId}/region-sets': { scope: 'group', action: 'upload-series', body: () => ({ name: 'Niño boxes', source: { kind: 'standard-boxes', boxIds: ['nino34'] } }) },
+  'GET /api/region-sets/{regionSetId}': { scope: 'group', action: 'view' },
+  'POST /api/region-sets/{regionSetId}/versions': { scope: 'group', action: 'upload-series', body: () => ({ source: { kind: 'standard-boxes', boxIds: ['nino3', 'nino4'] } }) },
+  'POST /api/groups/{groupId}/regional-budgets': {
+    scope: 'group',
+    action: 'upload-series',
+    body: (w) => ({ uploadId: w.budgetUploadId, regionSetId: w.regionSetId, terms: [{ variable: 'dic_tend', role: 'tendency' }, { variable: 'dic_adv', role: 'advection' }], depthLimits: [100], namePrefix: 'Walk budget' }),
+  },
   'GET /api/mail/outbox': { scope: 'self' },
   // The captured invitation mail belongs to group A, whose only admin is `lead`.
   'GET /api/mail/outbox/{messageId}': { scope: 'custom', expect: (a) => (a === 'lead' ? 'ok' : 404) },
@@ -240,6 +255,13 @@ export function indexCsv(): Buffer {
   return Buffer.from(lines.join('\n') + '\n');
 }
 
+// A cut of the native-grid budget fixture (common/test-fixtures/scripts/grids_reference.py) and a polygon holding all of it.
+const GRIDS_TINY_BUDGET = join(__dirname, '..', '..', 'common', 'test-fixtures', 'grids', 'grids_tiny_budget.nc');
+const GLOBE = {
+  type: 'FeatureCollection',
+  features: [{ type: 'Feature', properties: { name: 'globe' }, geometry: { type: 'Polygon', coordinates: [[[-180, -89], [0, -89], [180, -89], [180, 89], [0, 89], [-180, 89], [-180, -89]]] } }],
+};
+
 /** Builds group A's things (a fresh group, notebook, series, upload, fields, event set, checkpoint, comments, notification). */
 export async function buildWorld(url: string, p: People, dataDir: string): Promise<World> {
   const group = await buildGroup(url, p.lead, [p.coauthor, p.reviewer, p.reader, p.member, p.spare], 'Walk group A');
@@ -269,6 +291,8 @@ export async function buildWorld(url: string, p: People, dataDir: string): Promi
   const mail = await invitationMail(url, p.lead, invitee);
   // The outbox hides the link from the admin (it is the invitee's credential); the walk takes it from the stored mail.
   const stored = await mailTo(dataDir, invitee);
+  const budgetUploadId = (await up(readFileSync(GRIDS_TINY_BUDGET), 'tiny-budget.nc')).body.uploadId as string;
+  const regionSetId = (await api.post(`/api/groups/${group.id}/region-sets`).set(p.lead.auth).send({ name: 'Globe', source: { kind: 'geojson', geojson: GLOBE } }).expect(201)).body.id as string;
   return {
     groupId: group.id,
     notebookId: nb.id,
@@ -290,6 +314,8 @@ export async function buildWorld(url: string, p: People, dataDir: string): Promi
     notebookInvitationId,
     invitationToken: invitationToken(stored.text),
     messageId: mail.id,
+    regionSetId,
+    budgetUploadId,
   };
 }
 

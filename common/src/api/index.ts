@@ -22,3 +22,5 @@ export * from './mail';
 // The one rule for request text (issue 23).
 export * from './text';
 export * from './maps';
+// Regions on native grids and regional budgets.
+export * from './regions';

@@ -70,6 +70,16 @@ export const seriesTransformSchema = z.union([
   z.object({ type: z.literal('csv-column'), column: z.string(), layout: z.string() }),
   z.object({ type: z.literal('netcdf-variable'), variable: z.string() }),
   z.object({ type: z.literal('grid-reduction'), fieldId: z.string(), method: z.string(), description: z.string() }),
+  z.object({
+    type: z.literal('regional-budget'),
+    uploadId: z.string(),
+    variables: z.array(z.string()),
+    regionSetId: z.string(),
+    regionSetVersion: z.number(),
+    region: z.string(),
+    depth: z.string(),
+    description: z.string(),
+  }),
 ]);
 export type SeriesTransform = z.infer<typeof seriesTransformSchema>;
 

@@ -7,6 +7,7 @@ import { Migration20261201201010 } from './Migration20261201201010';
 import { Migration20261201214631 } from './Migration20261201214631';
 import { Migration20261201220000 } from './Migration20261201220000';
 import { Migration20261204180000 } from './Migration20261204180000';
+import { Migration20261204181500 } from './Migration20261204181500';
 
 /**
  * Every migration, oldest first. Create one with `npm run migration:create -w server`
@@ -29,4 +30,6 @@ export const migrationsList: MigrationObject[] = [
   { name: 'Migration20261201220000', class: Migration20261201220000 },
   // The CF calendar of each series version (noleap, 360_day … from model files).
   { name: 'Migration20261204180000', class: Migration20261204180000 },
+  // Region sets on native model grids (masks, polygons, standard boxes) with versions.
+  { name: 'Migration20261204181500', class: Migration20261204181500 },
 ];

@@ -104,6 +104,7 @@ export default function SeriesPage() {
                       {v.file.name}
                       {v.transform?.type === 'csv-column' && ` (column “${v.transform.column}”)`}
                       {v.transform?.type === 'netcdf-variable' && ` (variable “${v.transform.variable}”)`}
+                      {v.transform?.type === 'regional-budget' && <span title={v.transform.description}>{` (regional budget: ${v.transform.region}, ${v.transform.depth})`}</span>}
                     </span>
                   ) : (
                     v.transform?.type === 'grid-reduction' ? v.transform.description : '—'
