@@ -23,9 +23,9 @@ function directDft(re: number[], im: number[], inverse: boolean): [number[], num
 }
 
 describe('fftPlan()', () => {
-  it('matches the DFT definition summed directly, forward and inverse, for power-of-two and other lengths (Bluestein)', () => {
+  it('matches the DFT definition summed directly, forward and inverse: power-of-two, mixed-radix (12, 120, 121 = 11², 600, 1001 = 7·11·13) and Bluestein (17, 127) lengths', () => {
     const rng = mulberry32(5);
-    for (const n of [1, 2, 3, 8, 12, 120, 121, 127, 256]) {
+    for (const n of [1, 2, 3, 8, 12, 17, 120, 121, 127, 256, 600, 1001]) {
       const re = Array.from({ length: n }, () => rng() - 0.5);
       const im = Array.from({ length: n }, () => rng() - 0.5);
       const plan = fftPlan(n);

@@ -9,13 +9,16 @@ export interface FftPlan {
 
 /**
  * Plans an FFT of any length n ≥ 1: iterative radix-2 (Cooley & Tukey 1965, Math. Comp. 19:297)
- * when n is a power of two, otherwise Bluestein's chirp-z algorithm (Bluestein 1970, IEEE Trans.
+ * when n is a power of two, mixed radix (the same recursion over n's prime factors) when every
+ * prime factor is at most 13 (monthly lengths such as 120 or 600), otherwise Bluestein's chirp-z algorithm (Bluestein 1970, IEEE Trans.
  * Audio Electroacoust. 18:451), which rewrites kt = (k² + t² − (k−t)²)/2 so the DFT becomes a
  * convolution done with power-of-two FFTs of length ≥ 2n − 1. Twiddles, chirp and work buffers are
  * made once here, so each transform allocates nothing (the surrogate loop calls it thousands of times).
  */
 export function fftPlan(n: number): FftPlan {
   if ((n & (n - 1)) === 0) return radix2Plan(n);
+  const factors = smallPrimeFactors(n);
+  if (factors) return mixedRadixPlan(n, factors);
   let m = 1;
   while (m < 2 * n - 1) m *= 2;
   const inner = radix2Plan(m);
@@ -113,6 +116,78 @@ function radix2Plan(n: number): FftPlan {
           }
         }
       }
+    },
+  };
+}
+
+/** The prime factors of n in ascending order when all are ≤ 13, else null. */
+function smallPrimeFactors(n: number): number[] | null {
+  const out: number[] = [];
+  let rest = n;
+  for (const p of [2, 3, 5, 7, 11, 13]) while (rest % p === 0) { out.push(p); rest /= p; }
+  return rest === 1 ? out : null;
+}
+
+/**
+ * Recursive decimation-in-time FFT over the prime factors of n (Cooley & Tukey 1965, general radix):
+ * a length p·m transform is p transforms of length m over the inputs r, r + p, r + 2p, … combined
+ * with twiddles W^(r·k), each output column done in place through a p-long buffer.
+ */
+function mixedRadixPlan(n: number, factors: number[]): FftPlan {
+  const cos = new Float64Array(n);
+  const sin = new Float64Array(n);
+  for (let j = 0; j < n; j++) {
+    cos[j] = Math.cos((2 * Math.PI * j) / n);
+    sin[j] = Math.sin((2 * Math.PI * j) / n);
+  }
+  const outRe = new Float64Array(n);
+  const outIm = new Float64Array(n);
+  const p0 = Math.max(...factors);
+  const tr = new Float64Array(p0);
+  const ti = new Float64Array(p0);
+  let sign = -1;
+  const rec = (re: Float64Array, im: Float64Array, inOff: number, stride: number, len: number, outOff: number, fi: number): void => {
+    if (len === 1) {
+      outRe[outOff] = re[inOff];
+      outIm[outOff] = im[inOff];
+      return;
+    }
+    const p = factors[fi];
+    const m = len / p;
+    for (let r = 0; r < p; r++) rec(re, im, inOff + r * stride, stride * p, m, outOff + r * m, fi + 1);
+    const step = n / len;
+    for (let k = 0; k < m; k++) {
+      for (let r = 0; r < p; r++) {
+        const at = outOff + r * m + k;
+        const e = (r * k * step) % n;
+        const wr = cos[e];
+        const wi = sign * sin[e];
+        tr[r] = outRe[at] * wr - outIm[at] * wi;
+        ti[r] = outRe[at] * wi + outIm[at] * wr;
+      }
+      for (let q = 0; q < p; q++) {
+        let ar = tr[0];
+        let ai = ti[0];
+        for (let r = 1; r < p; r++) {
+          // W_len^(r·q·m) = W_p^(r·q), an n-th root of unity of exponent r·q·(n/p).
+          const e = ((r * q) % p) * (n / p);
+          const wr = cos[e];
+          const wi = sign * sin[e];
+          ar += tr[r] * wr - ti[r] * wi;
+          ai += tr[r] * wi + ti[r] * wr;
+        }
+        outRe[outOff + k + q * m] = ar;
+        outIm[outOff + k + q * m] = ai;
+      }
+    }
+  };
+  return {
+    n,
+    transform(re, im, inverse) {
+      sign = inverse ? 1 : -1;
+      rec(re, im, 0, 1, n, 0, 0);
+      re.set(outRe);
+      im.set(outIm);
     },
   };
 }
