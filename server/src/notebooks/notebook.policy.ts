@@ -51,9 +51,12 @@ export class NotebookPolicy {
     return { notebook: assignment.notebook, role: assignment.role };
   }
 
-  /** The ids of the notebooks of a group on which the person's role allows the action (e.g. which they may read). */
-  async notebooksAllowing(user: User | string, groupId: string, action: NotebookAction): Promise<Set<string>> {
-    const assignments = await this.em.find(NotebookRoleAssignment, { user, notebook: { group: groupId } });
+  /**
+   * The ids of the notebooks (of one group, or of every group with null) on which the person's role allows the action,
+   * e.g. which they may read. Work outside a request passes its own forked `em`.
+   */
+  async notebooksAllowing(user: User | string, groupId: string | null, action: NotebookAction, em: EntityManager = this.em): Promise<Set<string>> {
+    const assignments = await em.find(NotebookRoleAssignment, { user, ...(groupId === null ? {} : { notebook: { group: groupId } }) });
     return new Set(assignments.filter((a) => notebookRoleAllows(a.role, action)).map((a) => a.notebook.id));
   }
 
