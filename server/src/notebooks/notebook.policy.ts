@@ -60,6 +60,12 @@ export class NotebookPolicy {
     return new Set(assignments.filter((a) => notebookRoleAllows(a.role, action)).map((a) => a.notebook.id));
   }
 
+  /** Everyone whose role on the notebook allows the action (with their user), e.g. who may be sent its content by mail. */
+  async peopleAllowed(notebookId: string, action: NotebookAction, em: EntityManager = this.em): Promise<NotebookRoleAssignment[]> {
+    const assignments = await em.find(NotebookRoleAssignment, { notebook: notebookId }, { populate: ['user'] });
+    return assignments.filter((a) => notebookRoleAllows(a.role, action));
+  }
+
   /** Same rule without throwing, for sockets and for shaping what a client is offered. */
   async allows(user: User | string, notebookId: string, action: NotebookAction): Promise<boolean> {
     const assignment = await this.roleOf(user, notebookId);
