@@ -66,7 +66,7 @@ function header(dims: Record<string, number>, variables: CraftedVariable[], offs
       for (const [k, value] of attrs) (w.text(k), w.u32(2), w.text(value));
     }
     w.u32(TYPE_CODE[v.type]);
-    const bytes = v.dims.reduce((p, d) => p * dims[d], TYPE_SIZE[v.type]);
+    const bytes = v.dims.reduce<number>((p, d) => p * dims[d], TYPE_SIZE[v.type]);
     w.u32(Math.min(bytes, 0xffffffff)); // vsize; readers recompute it from the shape
     w.u32(offsets[i]);
   });
@@ -79,7 +79,7 @@ function header(dims: Record<string, number>, variables: CraftedVariable[], offs
  * the unwritten tail is a sparse hole of zeros), so a test can declare gigabytes and write kilobytes.
  */
 export function writeCraftedClassic(path: string, dims: Record<string, number>, variables: CraftedVariable[], length?: number): { declaredBytes: number } {
-  const sizes = variables.map((v) => v.dims.reduce((p, d) => p * dims[d], TYPE_SIZE[v.type]));
+  const sizes = variables.map((v) => v.dims.reduce<number>((p, d) => p * dims[d], TYPE_SIZE[v.type]));
   const headerBytes = header(dims, variables, variables.map(() => 0)).length;
   const offsets: number[] = [];
   let at = headerBytes;

@@ -1,5 +1,6 @@
 import type { EntityManager } from '@mikro-orm/sqlite';
 import { JwtService } from '@nestjs/jwt';
+import { EventEmitter2 } from '@nestjs/event-emitter';
 import { UnauthorizedException } from '@nestjs/common';
 import { describe, expect, it } from 'vitest';
 import { AuthService } from './auth.service';
@@ -19,7 +20,7 @@ describe('AuthService.login does not tell a known address from an unknown one by
     const known = { id: 'u1', email: 'known@example.org', name: 'Known', tokenVersion: 0, passwordHash: await hashPassword('the right password') };
     // Only findOne is used by login: a stand-in for the database keeps this a unit test of the code path.
     const em = { findOne: async (_e: unknown, where: { email: string }) => (where.email === known.email ? known : null) } as unknown as EntityManager;
-    const auth = new AuthService(em, new JwtService({ secret: 'x'.repeat(48) }));
+    const auth = new AuthService(em, new JwtService({ secret: 'x'.repeat(48) }), new EventEmitter2());
     const unknownTimes: number[] = [];
     const knownTimes: number[] = [];
     // Warm both paths once (the dummy hash is made on first use), then alternate so machine load hits both alike.

@@ -4,7 +4,8 @@ import { ConfigService } from '@nestjs/config';
 import { OnEvent } from '@nestjs/event-emitter';
 import { loggableError } from '../common/loggable-error';
 import { APP_CONFIG, type AppConfig } from '../config/app-config';
-import { Notebook, NotebookRoleAssignment } from '../notebooks/notebook.entity';
+import { Notebook } from '../notebooks/notebook.entity';
+import { NotebookPolicy } from '../notebooks/notebook.policy';
 import { Notification } from '../notifications/notification.entity';
 import { User } from '../users/user.entity';
 import { MAIL_EVENTS, type MentionsCreatedEvent, type SnapshotPublishedEvent } from './mail-events';
@@ -27,6 +28,7 @@ export class MailNotifier {
     private readonly em: EntityManager,
     private readonly sender: MailSender,
     private readonly mentions: MentionDigest,
+    private readonly notebooks: NotebookPolicy,
     @Inject(ConfigService) config: ConfigService,
   ) {
     this.config = config.getOrThrow<AppConfig>(APP_CONFIG);
@@ -39,7 +41,9 @@ export class MailNotifier {
       const notebook = await em.findOne(Notebook, { id: e.notebookId });
       if (!notebook) return;
       const publisher = await em.findOne(User, { id: e.publishedById });
-      const roles = await em.find(NotebookRoleAssignment, { notebook, user: { $ne: e.publishedById, emailNotifications: true } }, { populate: ['user'] });
+      // A snapshot is sent to whoever may read the notebook (NotebookPolicy), less its publisher and those who turned mail off.
+      const readers = await this.notebooks.peopleAllowed(notebook.id, 'read', em);
+      const roles = readers.filter((r) => r.user.id !== e.publishedById && r.user.emailNotifications);
       const content = snapshotPublishedMail({
         notebookTitle: notebook.title,
         number: e.number,

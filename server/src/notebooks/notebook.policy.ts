@@ -48,9 +48,12 @@ export class NotebookPolicy {
     return { notebook: assignment.notebook, role: assignment.role };
   }
 
-  /** The ids of the notebooks of a group on which the person's role allows the action (e.g. which they may read). */
-  async notebooksAllowing(user: User | string, groupId: string, action: NotebookAction): Promise<Set<string>> {
-    const assignments = await this.em.find(NotebookRoleAssignment, { user, notebook: { group: groupId } });
+  /**
+   * The ids of the notebooks (of one group, or of every group with null) on which the person's role allows the action,
+   * e.g. which they may read. Work outside a request passes its own forked `em`.
+   */
+  async notebooksAllowing(user: User | string, groupId: string | null, action: NotebookAction, em: EntityManager = this.em): Promise<Set<string>> {
+    const assignments = await em.find(NotebookRoleAssignment, { user, ...(groupId === null ? {} : { notebook: { group: groupId } }) });
     return new Set(assignments.filter((a) => notebookRoleAllows(a.role, action)).map((a) => a.notebook.id));
   }
 
@@ -62,6 +65,12 @@ export class NotebookPolicy {
   /** Why a role already looked up may not do the action (the sentence HTTP answers with 403), or null if it may. */
   refusal(role: NotebookRole, action: NotebookAction): string | null {
     return notebookRoleAllows(role, action) ? null : `as ${NOTEBOOK_ROLE_LABELS[role].toLowerCase()} you may not ${ACTION_WORDS[action]}`;
+  }
+
+  /** Everyone whose role on the notebook allows the action (with their user), e.g. who may be sent its content by mail. */
+  async peopleAllowed(notebookId: string, action: NotebookAction, em: EntityManager = this.em): Promise<NotebookRoleAssignment[]> {
+    const assignments = await em.find(NotebookRoleAssignment, { notebook: notebookId }, { populate: ['user'] });
+    return assignments.filter((a) => notebookRoleAllows(a.role, action));
   }
 
   /** Same rule without throwing, for sockets and for shaping what a client is offered. */

@@ -3,7 +3,7 @@ import { Injectable, NotFoundException } from '@nestjs/common';
 import { EventEmitter2 } from '@nestjs/event-emitter';
 import { COMMENT_LIMITS, NOTIFICATIONS_PAGE, SOCKET_EVENTS, type NotificationCreatedEvent, type NotificationList, type NotificationView } from '@upwell/common';
 import type { CommentThread } from '../comments/comment.entity';
-import { NotebookRoleAssignment } from '../notebooks/notebook.entity';
+import { NotebookPolicy } from '../notebooks/notebook.policy';
 import { MAIL_EVENTS, type MentionsCreatedEvent } from '../mail/mail-events';
 import { RealtimeEvents } from '../realtime/realtime-events';
 import { User } from '../users/user.entity';
@@ -26,6 +26,7 @@ export class NotificationsService {
     private readonly em: EntityManager,
     private readonly events: RealtimeEvents,
     private readonly emitter: EventEmitter2,
+    private readonly notebooks: NotebookPolicy,
   ) {}
 
   /**
@@ -77,7 +78,7 @@ export class NotificationsService {
 
   /** A notification about a notebook whose role was taken away would leak its comments: leave those out. */
   private async visible(userId: string) {
-    const roles = await this.em.fork().find(NotebookRoleAssignment, { user: userId });
-    return { recipient: userId, notebook: { $in: roles.map((r) => r.notebook.id) } };
+    const readable = await this.notebooks.notebooksAllowing(userId, null, 'read', this.em.fork());
+    return { recipient: userId, notebook: { $in: [...readable] } };
   }
 }
