@@ -108,12 +108,13 @@ describe.skipIf(!REDIS_SERVER)(REDIS_SERVER ? TITLE : `${TITLE} (skipped: redis-
     const onB = await client(b, coauthor);
     await onA.join(notebookId);
     await onB.join(notebookId);
+    // Whatever name A's client writes, others see the server's record of the person (presence-binding.e2e.spec.ts).
     onA.awareness.setLocalStateField('user', { name: 'Lead on A' });
     const seen = (c: DocClient) => (c.awareness.getStates().get(onA.doc.clientID) as { user?: { name: string } } | undefined)?.user?.name;
-    await eventually(() => seen(onB) === 'Lead on A', 5000, "B's client to see A's presence");
+    await eventually(() => seen(onB) === lead.user.name, 5000, "B's client to see A's presence");
     const late = await client(b, coauthor);
     await late.join(notebookId);
-    await eventually(() => seen(late) === 'Lead on A', 5000, "a late joiner on B to see A's presence");
+    await eventually(() => seen(late) === lead.user.name, 5000, "a late joiner on B to see A's presence");
   });
 
   it('delivers a comment created through A and a new series version imported through A to sockets on B', async () => {
