@@ -44,7 +44,7 @@ describe('boundaries between engine, contracts, figure kinds, server and web', (
         'apps-use-the-common-entry: server/src/deep.ts → common/src/stats/mean.ts',
         'common-never-imports-apps: common/src/figure-kinds/lag/spec.ts → web/src/page.ts',
         'common-never-imports-apps: common/src/stats/mean.ts → server/src/secret.ts',
-        'contracts-import-only-engine: common/src/api/labels.ts → common/src/figure-kinds/lag/spec.ts',
+        'only-figure-routes-import-figure-kinds: common/src/api/labels.ts → common/src/figure-kinds/lag/spec.ts',
         'demo-generator-stands-alone: server/demo-generator/src/seed.ts → server/src/secret.ts',
         'engine-has-no-dependencies: common/src/stats/sum.ts → fs',
         'engine-imports-only-engine: common/src/stats/mean.ts → server/src/secret.ts',
