@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { plainText } from './text';
 import { STANDARD_BOXES } from '../regions/standard-boxes';
 
 /** Limits of region sets and regional budgets, shared by forms and server. */
@@ -11,7 +12,7 @@ export const REGION_LIMITS = {
   maxDepthM: 11_000,
 } as const;
 
-const name = z.string().trim().min(1).max(REGION_LIMITS.nameMax);
+const name = plainText({ what: 'name' }).trim().min(1).max(REGION_LIMITS.nameMax);
 const position = z.tuple([z.number().min(-540).max(540), z.number().min(-90).max(90)]);
 const ring = z.array(position).min(4, 'a ring needs at least 4 positions (closed)').max(REGION_LIMITS.verticesMax);
 const polygon = z.strictObject({ type: z.literal('Polygon'), coordinates: z.array(ring).min(1).max(100) });
@@ -93,7 +94,7 @@ export const regionalBudgetRequestSchema = z
     inventoryVariable: z.string().trim().min(1).max(200).optional(),
     depthLimits: z.array(z.number().positive().max(REGION_LIMITS.maxDepthM)).max(REGION_LIMITS.depthLimitsMax).default([100]),
     units: z.enum(['Pg C/yr', 'mol/s']).default('Pg C/yr'),
-    namePrefix: z.string().trim().min(1).max(80),
+    namePrefix: plainText({ what: 'namePrefix' }).trim().min(1).max(80),
   })
   .refine((b) => b.terms.filter((t) => t.role === 'tendency').length === 1, 'terms: map exactly one variable to the tendency')
   .refine((b) => new Set(b.terms.map((t) => t.variable)).size === b.terms.length, 'terms: each variable may be mapped once');
