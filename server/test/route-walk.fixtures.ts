@@ -106,6 +106,8 @@ export type RouteRule = {
   openStatus?: number;
   /** The path parameter is itself the credential (a share token): whoever holds it is let in, outsiders too. */
   capability?: boolean;
+  /** A POST that computes and stores nothing (e.g. a map): actors it lets in share one world instead of each building one. */
+  readOnly?: boolean;
 } & (
   | { scope: 'public' | 'self' }
   | { scope: 'notebook'; action: NotebookAction }
@@ -164,7 +166,7 @@ export const ROUTE_RULES: Record<string, RouteRule> = {
   'GET /api/groups/{groupId}/fields': { scope: 'group', action: 'view' },
   'GET /api/zonal-fields/{fieldId}': { scope: 'group', action: 'view' },
   'POST /api/fields/{fieldId}/reductions': { scope: 'group', action: 'upload-series', body: () => ({ kind: 'zonal-mean', name: 'Zonal mean', lon: [0, 360] }) },
-  'POST /api/fields/{fieldId}/maps': { scope: 'group', action: 'view', body: () => ({ mode: 'mean' }) },
+  'POST /api/fields/{fieldId}/maps': { scope: 'group', action: 'view', readOnly: true, body: () => ({ mode: 'mean' }) },
   'POST /api/notebooks/{notebookId}/figures': {
     scope: 'notebook', action: 'read', lagFields: ['recipe.maxLag'],
     body: (w) => ({ recipe: { kind: 'lag-correlation', index: series(w), series: series(w), maxLag: 6 } }),
