@@ -7,6 +7,7 @@ import { ReactNodeViewRenderer } from '@tiptap/react';
 import { DOCUMENT_FIELD, LIVE_FIGURE, LIVE_NUMBER, LiveFigure, LiveNumber, upwellDocumentExtensions } from '@upwell/common';
 import type * as Y from 'yjs';
 import { insertFigure, typedTriggerBefore } from './commands';
+import { selectLiveNodeInTheWay } from './guard-live-nodes';
 import { LiveFigureNodeView } from './LiveFigureNodeView';
 import { LiveNumberNodeView } from './LiveNumberNodeView';
 
@@ -61,6 +62,9 @@ export const UpwellShortcuts = Extension.create<UpwellShortcutOptions>({
         this.options.onInsertNumber();
         return true;
       },
+      // A stray key next to a live figure or number selects it; only a second, explicit press deletes it.
+      Backspace: () => this.editor.isEditable && selectLiveNodeInTheWay(this.editor.state, this.editor.view.dispatch, 'backward'),
+      Delete: () => this.editor.isEditable && selectLiveNodeInTheWay(this.editor.state, this.editor.view.dispatch, 'forward'),
       Enter: () => {
         if (!this.editor.isEditable) return false;
         const trigger = typedTriggerBefore(this.editor);
