@@ -226,6 +226,11 @@ describe('POST /api/notebooks/:notebookId/figures', () => {
     expect(num(r, 'strongest.nEff')).toBeLessThan(num(r, 'strongest.n')!);
     expect(r.methods).toContain('nEff = n(1 − r1x r1y)/(1 + r1x r1y), Bretherton et al. 1999');
     expect(r.cautions).toContain('Correlation is not causation; significance assumes AR(1) persistence (nEff).');
+    // Issue 14: per-lag p and threshold are pointwise (multiple testing across lags, Wilks 2016 BAMS) — said in methods, label and cautions.
+    expect(r.methods).toContain('pointwise significance threshold');
+    expect(r.methods).toContain('not corrected for the search over lags');
+    expect(r.numbers.find((n) => n.key === 'strongest.p')!.label).toMatch(/^Pointwise p-value/);
+    expect(r.cautions.some((c) => c.includes('pointwise'))).toBe(true);
   });
 
   it('composite: warm-event composite of the DIC anomaly equals composite() at the rule events’ peaks', async () => {
@@ -239,6 +244,9 @@ describe('POST /api/notebooks/:notebookId/figures', () => {
     // DIC was built to respond +0.5 × the index 6 months later, so the largest composite mean sits near +6.
     expect(Math.abs(num(r, 'peak.offset')! - 6)).toBeLessThanOrEqual(1);
     expect(num(r, 'peak.mean')).toBeGreaterThan(0);
+    // Issue 14 item 10: a composite uses no nEff, so its cautions do not claim AR(1) persistence.
+    expect(r.cautions).toContain('Correlation is not causation.');
+    expect(r.cautions.join(' ')).not.toContain('nEff');
   });
 
   it('event-table: rate integrated, inventory differenced, a non-carbon unit null with a warning naming it', async () => {
@@ -342,6 +350,9 @@ describe('POST /api/notebooks/:notebookId/figures', () => {
     expect(num(r, 'slope')).toBeCloseTo(linearRegression(pairs).m, 10);
     // Built as −0.35 × index: the slope is near −0.35 Pg C/yr per degC.
     expect(num(r, 'slope')).toBeCloseTo(-0.35, 1);
+    // Issue 14 item 10: the scatter's OLS fit uses no nEff, so its cautions do not claim AR(1) persistence.
+    expect(r.cautions).toContain('Correlation is not causation.');
+    expect(r.cautions.join(' ')).not.toContain('nEff');
   });
 
   describe('cache', () => {

@@ -7,8 +7,8 @@ export function lagCorrelationMethods(r: z.output<typeof lagCorrelationRecipeSch
   return methodsSentence(
     [
       `${r.method === 'spearman' ? 'Spearman rank' : 'Pearson'} correlation of ${index.name} and ${series.name} ${describeAnomaly(r.anomaly)}, at lags −${r.maxLag} to +${r.maxLag} months (positive: ${index.name} leads)`,
-      `two-sided t-test p-values with ${NEFF_FORM}`,
-      `significance threshold |r| at alpha = ${r.alpha} from each lag's nEff`,
+      `pointwise two-sided t-test p-values with ${NEFF_FORM}`,
+      `pointwise significance threshold |r| at alpha = ${r.alpha} from each lag's nEff (each lag tested alone, not corrected for the search over lags)`,
     ],
     [index, series],
   );

@@ -9,7 +9,7 @@
  * - `strongest.lag` (months), `strongest.r`, `strongest.p`, `strongest.nEff`, `strongest.n`
  * - `lag0.r` — correlation without lag
  */
-import { CORRELATION_CAUTION, lagCorrelation, lagCorrelationMethods, significanceThreshold, type LagCorrelationInput, type LagRow } from '@upwell/common';
+import { CORRELATION_CAUTION, POINTWISE_CAUTION, lagCorrelation, lagCorrelationMethods, significanceThreshold, type LagCorrelationInput, type LagRow } from '@upwell/common';
 import { seriesAnomaly } from '../figure-anomaly';
 import { seriesAt } from '../series-input';
 import { bindingAt, type FigureRecipeHandler } from './recipe';
@@ -34,13 +34,13 @@ export const lagCorrelationRecipe: FigureRecipeHandler<'lag-correlation'> = {
       numbers: [
         { key: 'strongest.lag', label: `Lag of the strongest correlation (positive: ${index.name} leads)`, value: strongest?.lag ?? null, units: 'months' },
         { key: 'strongest.r', label: 'Strongest correlation', value: strongest?.r ?? null, units: '' },
-        { key: 'strongest.p', label: 'p-value of the strongest correlation (two-sided, nEff)', value: strongest?.p ?? null, units: '' },
+        { key: 'strongest.p', label: 'Pointwise p-value of the strongest correlation (two-sided, nEff; not corrected for the search over lags)', value: strongest?.p ?? null, units: '' },
         { key: 'strongest.nEff', label: 'Effective sample size at the strongest lag', value: strongest?.nEff ?? null, units: 'pairs' },
         { key: 'strongest.n', label: 'Pairs at the strongest lag', value: strongest?.n ?? null, units: 'pairs' },
         { key: 'lag0.r', label: 'Correlation without lag', value: zero.r, units: '' },
       ],
       methods: lagCorrelationMethods(r, index, series),
-      cautions: [CORRELATION_CAUTION],
+      cautions: [CORRELATION_CAUTION, POINTWISE_CAUTION],
       warnings: [...x.warnings, ...y.warnings],
     };
   },
