@@ -231,6 +231,14 @@ describe('POST /api/notebooks/:notebookId/figures', () => {
     expect(r.methods).toContain('not corrected for the search over lags');
     expect(r.numbers.find((n) => n.key === 'strongest.p')!.label).toMatch(/^Pointwise p-value/);
     expect(r.cautions.some((c) => c.includes('pointwise'))).toBe(true);
+    // pSearch is the engine's search-corrected p (Ebisuzaki 1997 surrogates) with the recipe's defaults: 1000 surrogates, seed 1997.
+    const engine = lagCorrelation({ x, y, maxLag: 12, surrogates: 1000, seed: 1997 }).strongest!;
+    expect(num(r, 'strongest.pSearch')).toBe(engine.pSearch);
+    expect((r.data as { strongest: { pSearch: number } }).strongest.pSearch).toBe(engine.pSearch);
+    // A lag built in (r < −0.8) is far beyond what the search finds by chance: hardly any of the 1000 surrogates reach it.
+    expect(num(r, 'strongest.pSearch')).toBeLessThan(0.01);
+    expect(r.methods).toContain('1000 phase-randomised surrogates');
+    expect(r.methods).toContain('lags −12 to +12');
   });
 
   it('composite: warm-event composite of the DIC anomaly equals composite() at the rule events’ peaks', async () => {
