@@ -279,6 +279,8 @@ describe('POST /api/notebooks/:notebookId/figures', () => {
     // Outgassing falls during warm events (built with −0.35 × index), so its change over the strongest warm event is negative.
     expect(num(r, `strongest.${ids.flux}.PgC`)).toBeLessThan(0);
     expect(r.methods).toContain('integrating its anomaly');
+    // Issue 14: the inventory's span rule is the rate's (engine inventoryChange), said in the methods.
+    expect(r.methods).toContain('from the start of the first month to the end of the last, boundary values as the mean of the neighbouring monthly means');
   });
 
   it('event-table by hand: 1 Pg C/yr of anomaly over the 12 months of 2022 (365 days) is 365/365.25 Pg C (Julian year)', async () => {
