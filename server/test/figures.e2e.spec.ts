@@ -184,6 +184,13 @@ describe('POST /api/notebooks/:notebookId/figures', () => {
     expect(num(r, 'events.warm.count')).toBe(4);
     expect(num(r, 'events.cold.count')).toBe(4);
     expect(num(r, 'trend.perDecade')).toBeCloseTo(trend({ series: a.anomaly, per: 'decade' }).slope!, 12);
+    // Issue 14: OLS and AR(1)-adjusted SE and p side by side (engine trend, Santer et al. 2000).
+    const t = trend({ series: a.anomaly, per: 'decade' });
+    expect(num(r, 'trend.perDecadeStdErr')).toBe(t.slopeStdErr);
+    expect(num(r, 'trend.perDecadeStdErrAdjusted')).toBe(t.slopeStdErrAdjusted);
+    expect(num(r, 'trend.pAdjusted')).toBe(t.pAdjusted);
+    expect((r.data as { trend: { pAdjusted: number } }).trend.pAdjusted).toBe(t.pAdjusted);
+    expect(r.methods).toContain('Santer et al. 2000');
     expect(r.used.map((u) => [u.name, u.version, u.origin])).toEqual([['Outgassing', 1, 'model-output'], ['Niño-like index', 1, 'observation']]);
     expect(r.used[0].valuesSha256).toMatch(/^[0-9a-f]{64}$/);
     expect(r.methods).toContain('1991-01 to 2020-12');
