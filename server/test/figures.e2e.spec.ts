@@ -367,6 +367,8 @@ describe('POST /api/notebooks/:notebookId/figures', () => {
     expect(num(r, 'slope')).toBeCloseTo(linearRegression(pairs).m, 10);
     // Built as −0.35 × index: the slope is near −0.35 Pg C/yr per degC.
     expect(num(r, 'slope')).toBeCloseTo(-0.35, 1);
+    // Issue 14: the methods say which slope SE is shown (OLS, pairs independent).
+    expect(r.methods).toContain('its slope standard error the OLS one (pairs taken as independent');
     // Issue 14 item 10: the scatter's OLS fit uses no nEff, so its cautions do not claim AR(1) persistence.
     expect(r.cautions).toContain('Correlation is not causation.');
     expect(r.cautions.join(' ')).not.toContain('nEff');
