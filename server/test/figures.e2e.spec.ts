@@ -184,6 +184,13 @@ describe('POST /api/notebooks/:notebookId/figures', () => {
     expect(num(r, 'events.warm.count')).toBe(4);
     expect(num(r, 'events.cold.count')).toBe(4);
     expect(num(r, 'trend.perDecade')).toBeCloseTo(trend({ series: a.anomaly, per: 'decade' }).slope!, 12);
+    // Issue 14: OLS and AR(1)-adjusted SE and p side by side (engine trend, Santer et al. 2000).
+    const t = trend({ series: a.anomaly, per: 'decade' });
+    expect(num(r, 'trend.perDecadeStdErr')).toBe(t.slopeStdErr);
+    expect(num(r, 'trend.perDecadeStdErrAdjusted')).toBe(t.slopeStdErrAdjusted);
+    expect(num(r, 'trend.pAdjusted')).toBe(t.pAdjusted);
+    expect((r.data as { trend: { pAdjusted: number } }).trend.pAdjusted).toBe(t.pAdjusted);
+    expect(r.methods).toContain('Santer et al. 2000');
     expect(r.used.map((u) => [u.name, u.version, u.origin])).toEqual([['Outgassing', 1, 'model-output'], ['Niño-like index', 1, 'observation']]);
     expect(r.used[0].valuesSha256).toMatch(/^[0-9a-f]{64}$/);
     expect(r.methods).toContain('1991-01 to 2020-12');
@@ -226,6 +233,19 @@ describe('POST /api/notebooks/:notebookId/figures', () => {
     expect(num(r, 'strongest.nEff')).toBeLessThan(num(r, 'strongest.n')!);
     expect(r.methods).toContain('nEff = n(1 − r1x r1y)/(1 + r1x r1y), Bretherton et al. 1999');
     expect(r.cautions).toContain('Correlation is not causation; significance assumes AR(1) persistence (nEff).');
+    // Issue 14: per-lag p and threshold are pointwise (multiple testing across lags, Wilks 2016 BAMS) — said in methods, label and cautions.
+    expect(r.methods).toContain('pointwise significance threshold');
+    expect(r.methods).toContain('not corrected for the search over lags');
+    expect(r.numbers.find((n) => n.key === 'strongest.p')!.label).toMatch(/^Pointwise p-value/);
+    expect(r.cautions.some((c) => c.includes('pointwise'))).toBe(true);
+    // pSearch is the engine's search-corrected p (Ebisuzaki 1997 surrogates) with the recipe's defaults: 1000 surrogates, seed 1997.
+    const engine = lagCorrelation({ x, y, maxLag: 12, surrogates: 1000, seed: 1997 }).strongest!;
+    expect(num(r, 'strongest.pSearch')).toBe(engine.pSearch);
+    expect((r.data as { strongest: { pSearch: number } }).strongest.pSearch).toBe(engine.pSearch);
+    // A lag built in (r < −0.8) is far beyond what the search finds by chance: hardly any of the 1000 surrogates reach it.
+    expect(num(r, 'strongest.pSearch')).toBeLessThan(0.01);
+    expect(r.methods).toContain('1000 phase-randomised surrogates');
+    expect(r.methods).toContain('lags −12 to +12');
   });
 
   it('composite: warm-event composite of the DIC anomaly equals composite() at the rule events’ peaks', async () => {
@@ -239,6 +259,9 @@ describe('POST /api/notebooks/:notebookId/figures', () => {
     // DIC was built to respond +0.5 × the index 6 months later, so the largest composite mean sits near +6.
     expect(Math.abs(num(r, 'peak.offset')! - 6)).toBeLessThanOrEqual(1);
     expect(num(r, 'peak.mean')).toBeGreaterThan(0);
+    // Issue 14 item 10: a composite uses no nEff, so its cautions do not claim AR(1) persistence.
+    expect(r.cautions).toContain('Correlation is not causation.');
+    expect(r.cautions.join(' ')).not.toContain('nEff');
   });
 
   it('event-table: rate integrated, inventory differenced, a non-carbon unit null with a warning naming it', async () => {
@@ -263,6 +286,8 @@ describe('POST /api/notebooks/:notebookId/figures', () => {
     // Outgassing falls during warm events (built with −0.35 × index), so its change over the strongest warm event is negative.
     expect(num(r, `strongest.${ids.flux}.PgC`)).toBeLessThan(0);
     expect(r.methods).toContain('integrating its anomaly');
+    // Issue 14: the inventory's span rule is the rate's (engine inventoryChange), said in the methods.
+    expect(r.methods).toContain('from the start of the first month to the end of the last, boundary values as the mean of the neighbouring monthly means');
   });
 
   it('event-table by hand: 1 Pg C/yr of anomaly over the 12 months of 2022 (365 days) is 365/365.25 Pg C (Julian year)', async () => {
@@ -342,6 +367,11 @@ describe('POST /api/notebooks/:notebookId/figures', () => {
     expect(num(r, 'slope')).toBeCloseTo(linearRegression(pairs).m, 10);
     // Built as −0.35 × index: the slope is near −0.35 Pg C/yr per degC.
     expect(num(r, 'slope')).toBeCloseTo(-0.35, 1);
+    // Issue 14: the methods say which slope SE is shown (OLS, pairs independent).
+    expect(r.methods).toContain('its slope standard error the OLS one (pairs taken as independent');
+    // Issue 14 item 10: the scatter's OLS fit uses no nEff, so its cautions do not claim AR(1) persistence.
+    expect(r.cautions).toContain('Correlation is not causation.');
+    expect(r.cautions.join(' ')).not.toContain('nEff');
   });
 
   describe('cache', () => {

@@ -26,7 +26,7 @@ describe('figure-kind registry', () => {
 
   it('takes form defaults from the schema: lag 24, event rule 0.5 / 5 / 3 (NOAA CPC ONI rule), WMO 1991–2020 normal', () => {
     const lag = FIGURE_REGISTRY.defaultRecipe('lag-correlation');
-    expect(lag).toMatchObject({ maxLag: 24, method: 'pearson', alpha: 0.05, anomaly: { base: { from: '1991-01', to: '2020-12' }, smooth: 1 } });
+    expect(lag).toMatchObject({ maxLag: 24, method: 'pearson', alpha: 0.05, significance: 'ar1', surrogates: 1000, seed: 1997, anomaly: { base: { from: '1991-01', to: '2020-12' }, smooth: 1 } });
     expect(FIGURE_REGISTRY.defaultRecipe('timeseries').events).toEqual({ from: 'rule', threshold: 0.5, minDuration: 5, smooth: 3 });
     expect(DEFAULT_EVENT_SOURCE).toEqual(eventRuleSchema.parse({ from: 'rule' }));
   });
@@ -34,6 +34,8 @@ describe('figure-kind registry', () => {
   it('reads bounds from the schema checks, for forms', () => {
     expect(numberBounds(lagCorrelationRecipeSchema, ['maxLag'])).toEqual({ min: 0, max: 60 });
     expect(numberBounds(lagCorrelationRecipeSchema, ['anomaly', 'smooth'])).toEqual({ min: 1, max: 61 });
+    // Issue 14: surrogates for pSearch, bounded like the analysis route (MAX_SURROGATES = 10 000).
+    expect(numberBounds(lagCorrelationRecipeSchema, ['surrogates'])).toEqual({ min: 0, max: 10_000 });
     expect(numberBounds(FIGURE_REGISTRY.definition('composite').recipe, ['events', 'minDuration'])).toEqual({ min: 1, max: 60 });
     expect(arrayMax(FIGURE_REGISTRY.definition('budget').recipe, ['terms'])).toBe(12);
   });

@@ -88,6 +88,12 @@ describe('lag-correlation spec', () => {
     expect(values.every((v) => v.negThreshold === -0.31 && v.threshold === 0.31)).toBe(true);
   });
 
+  it('labels the threshold pointwise in the legend and the caption (issue 14: each lag tested alone, Wilks 2016 BAMS)', () => {
+    const text = JSON.stringify(spec);
+    expect(text).toContain('|r| against the pointwise p = 0.05 threshold');
+    expect(text).toContain('±pointwise threshold for p = 0.05');
+  });
+
   it('marks the strongest lag with a text label', () => {
     const [text] = ofType(spec, 'text');
     expect(text.data!.values[0]).toMatchObject({ lag: 1, r: 0.62, label: 'strongest: r = 0.62 at lag 1' });

@@ -41,7 +41,8 @@ describe('RecipeForm', () => {
     expect(screen.getByLabelText('Climate index')).toBeTruthy();
     expect(screen.getByLabelText('Lags from −N to N months')).toHaveProperty('value', '24');
     expect(screen.getByLabelText('Correlation')).toHaveProperty('value', 'pearson');
-    expect(screen.getByLabelText('Significance level α')).toBeTruthy();
+    expect(screen.getByLabelText('Significance level α (pointwise, each lag alone)')).toBeTruthy();
+    expect(screen.getByLabelText('Surrogates for the search-corrected p of the strongest lag')).toBeTruthy();
     expect(screen.queryByLabelText('Threshold (index units)')).toBeNull();
 
     choose('What the figure shows', 'composite');
@@ -120,6 +121,10 @@ describe('RecipeForm', () => {
       maxLag: 36,
       method: 'spearman',
       alpha: 0.05,
+      // Issue 14 defaults: t test with nEff per lag, 1000 surrogates for the strongest lag's pSearch, fixed seed (the engine's 1997).
+      significance: 'ar1',
+      surrogates: 1000,
+      seed: 1997,
     });
   });
 

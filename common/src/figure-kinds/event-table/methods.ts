@@ -6,7 +6,8 @@ import type { eventTableRecipeSchema } from './index';
 export function eventTableMethods(r: z.output<typeof eventTableRecipeSchema>, index: NamedVersion, carbon: NamedVersion[], eventsClause: string): string {
   const carbonClause = carbon.length
     ? `carbon change in Pg C over each event's months from ${carbon.map((c) => c.name).join(', ')} ${describeAnomaly(r.anomaly, { skip: ['standardize', 'smooth'] })}: ` +
-      'a rate by integrating its anomaly over the event (calendar month lengths, Julian year of 365.25 days), an inventory as its anomaly at the end minus at the start'
+      "a rate by integrating its anomaly over the event (calendar month lengths, Julian year of 365.25 days), an inventory as its anomaly's change over the same span, from the start of the first month to the end of the last, " +
+      'boundary values as the mean of the neighbouring monthly means (weighted by month length when the months differ)'
     : '';
   return methodsSentence([eventsClause, carbonClause], [index, ...carbon]);
 }

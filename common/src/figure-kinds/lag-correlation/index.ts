@@ -1,5 +1,6 @@
 /** Correlation of two series' anomalies at lags −maxLag..+maxLag, with the |r| needed for significance at each lag. */
 import { z } from 'zod';
+import { DEFAULT_SURROGATE_SEED, DEFAULT_SURROGATES } from '../../stats/lag-correlation';
 import { defineFigureKind } from '../kind';
 import { anomalyField, seriesBindingSchema } from '../shared/recipe-parts';
 import { nullableNumber } from '../shared/result-parts';
@@ -11,6 +12,9 @@ import { lagCorrelationSpec } from './spec';
  */
 export const FIGURE_MAX_LAG = 60;
 
+/** Most phase-randomised surrogates a figure draws (the analysis route's MAX_SURROGATES). */
+export const FIGURE_MAX_SURROGATES = 10_000;
+
 /** Recipe of a lag-correlation figure. */
 export const lagCorrelationRecipeSchema = z.strictObject({
   kind: z.literal('lag-correlation'),
@@ -20,6 +24,12 @@ export const lagCorrelationRecipeSchema = z.strictObject({
   maxLag: z.number().int().min(0).max(FIGURE_MAX_LAG).default(24),
   method: z.enum(['pearson', 'spearman']).default('pearson'),
   alpha: z.number().gt(0).lt(0.5).default(0.05),
+  /** Per-lag test: t test with nEff ("ar1") or phase-randomised surrogates (Ebisuzaki 1997, J. Climate). */
+  significance: z.enum(['ar1', 'phase-randomised']).default('ar1'),
+  /** Surrogates for the strongest lag's search-corrected p (pSearch); 0 draws none. */
+  surrogates: z.number().int().min(0).max(FIGURE_MAX_SURROGATES).default(DEFAULT_SURROGATES),
+  /** Seed of the surrogates, fixed so that a figure repeats. */
+  seed: z.number().int().default(DEFAULT_SURROGATE_SEED),
 });
 
 /** One lag: the engine's row (LagCorrelationRow; the server's compute checks it `satisfies` this) with the |r| needed for significance at alpha. */
@@ -31,7 +41,8 @@ export const lagCorrelationResultSchema = z.object({
   method: z.enum(['pearson', 'spearman']),
   alpha: z.number(),
   lags: z.array(lagRowSchema),
-  strongest: lagRowSchema.nullable(),
+  /** pSearch: the strongest lag's p corrected for the search over lags; absent in results stored before issue 14. */
+  strongest: lagRowSchema.extend({ pSearch: nullableNumber().optional() }).nullable(),
 });
 export type LagCorrelationData = z.output<typeof lagCorrelationResultSchema>;
 

@@ -35,7 +35,7 @@ export function lagCorrelationSpec(data: LagCorrelationData, _ctx?: SpecContext)
           field: 'beyond',
           type: 'nominal',
           scale: { domain: ['beyond threshold', 'within threshold'], range: [ACCENT, '#c9c4b8'] },
-          legend: { title: `|r| against the p = ${alpha} threshold` },
+          legend: { title: `|r| against the pointwise p = ${alpha} threshold` },
         },
       },
     },
@@ -67,7 +67,7 @@ export function lagCorrelationSpec(data: LagCorrelationData, _ctx?: SpecContext)
     height: 240,
     data: { values },
     layer: layers,
-    title: { text: `Dashed red rules: ±threshold for p = ${alpha} (effective sample size)`, fontSize: 11 },
+    title: { text: `Dashed red rules: ±pointwise threshold for p = ${alpha} (effective sample size, each lag alone)`, fontSize: 11 },
     config: BASE_CONFIG,
   } as FigureSpec;
 }

@@ -7,7 +7,7 @@ export function scatterMethods(r: z.output<typeof scatterRecipeSchema>, index: N
   return methodsSentence(
     [
       `${series.name} against ${index.name} ${describeAnomaly(r.anomaly)}, ${series.name} taken ${r.lag} month${Math.abs(r.lag) === 1 ? '' : 's'} after ${index.name}`,
-      'line by ordinary least squares of the series on the index',
+      'line by ordinary least squares of the series on the index, its slope standard error the OLS one (pairs taken as independent, not adjusted for autocorrelation)',
     ],
     [index, series],
   );

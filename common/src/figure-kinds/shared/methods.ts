@@ -19,7 +19,18 @@ export const NEFF_FORM = 'nEff = n(1 − r1x r1y)/(1 + r1x r1y), Bretherton et a
 export const WMO_CLIMATOLOGY_RULE = 'a calendar month needs values in 80% of base-period years, WMO-No. 1203';
 
 /** Caution under every figure that correlates or composites. */
+export const CAUSATION_CAUTION = 'Correlation is not causation.';
+
+/** Caution under figures whose p-values use nEff (lag correlation): the method they used, said plainly. */
 export const CORRELATION_CAUTION = 'Correlation is not causation; significance assumes AR(1) persistence (nEff).';
+
+/**
+ * Caution under the lag-correlation figure: each lag's p and threshold are pointwise, so searching
+ * many lags finds a "significant" one by chance more often than alpha (the multiple-testing problem,
+ * Wilks 2016, Bull. Amer. Meteor. Soc.).
+ */
+export const POINTWISE_CAUTION =
+  "Each lag's p-value and threshold are pointwise (one lag tested alone); with many lags searched, one crosses the threshold by chance more often than alpha.";
 
 /** Caution when any input is model output. */
 export const MODEL_OUTPUT_CAUTION = 'Model output, not observation.';

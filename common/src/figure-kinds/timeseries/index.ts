@@ -22,7 +22,19 @@ export const timeseriesResultSchema = z.object({
   show: z.enum(['raw', 'anomaly']),
   points: z.array(monthValueSchema),
   events: z.array(figureEventSchema),
-  trend: z.object({ perDecade: nullableNumber(), perDecadeStdErr: nullableNumber(), r2: nullableNumber(), n: z.number() }),
+  /**
+   * perDecadeStdErr is the OLS one; perDecadeStdErrAdjusted, nEffResiduals and pAdjusted allow for AR(1) residuals
+   * (Santer et al. 2000, J. Geophys. Res.); absent in results stored before issue 14.
+   */
+  trend: z.object({
+    perDecade: nullableNumber(),
+    perDecadeStdErr: nullableNumber(),
+    r2: nullableNumber(),
+    n: z.number(),
+    perDecadeStdErrAdjusted: nullableNumber().optional(),
+    nEffResiduals: nullableNumber().optional(),
+    pAdjusted: nullableNumber().optional(),
+  }),
 });
 export type TimeseriesData = z.output<typeof timeseriesResultSchema>;
 

@@ -7,7 +7,7 @@ export function timeseriesMethods(r: z.output<typeof timeseriesRecipeSchema>, se
   return methodsSentence(
     [
       r.show === 'anomaly' ? `${series.name} as ${describeAnomaly(r.anomaly)}` : `${series.name} as stored`,
-      'trend by ordinary least squares, per decade',
+      'trend by ordinary least squares, per decade, with the OLS standard error and the standard error and p adjusted for AR(1) residuals (nEff = n(1 − r1)/(1 + r1), Santer et al. 2000, J. Geophys. Res.)',
       `shaded ${eventsClause}`,
     ],
     used,

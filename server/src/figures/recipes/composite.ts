@@ -10,7 +10,7 @@
  * - `peak.offset` — its offset from the event peaks, months (positive: after)
  * - `events.count` — number of events composited
  */
-import { composite, compositeMethods, CORRELATION_CAUTION } from '@upwell/common';
+import { composite, compositeMethods, CAUSATION_CAUTION } from '@upwell/common';
 import { seriesAnomaly } from '../figure-anomaly';
 import { resolveEvents } from '../figure-events';
 import { seriesAt } from '../series-input';
@@ -41,7 +41,7 @@ export const compositeRecipe: FigureRecipeHandler<'composite'> = {
         { key: 'events.count', label: `Number of ${r.phase} events composited`, value: events.length, units: 'events' },
       ],
       methods: compositeMethods(r, index, series, ev.clause),
-      cautions: [CORRELATION_CAUTION],
+      cautions: [CAUSATION_CAUTION],
       warnings,
     };
   },

@@ -3,13 +3,14 @@
  * (engine `lagCorrelation`; positive lag: the index leads the series), with the |r| needed for
  * significance at alpha from each lag's nEff (engine `significanceThreshold`).
  *
- * data: LagCorrelationData (common/src/figure-kinds/lag-correlation) — `lags` [{ lag, r, n, nEff, p, threshold }], `strongest` (largest |r|).
+ * data: LagCorrelationData (common/src/figure-kinds/lag-correlation) — `lags` [{ lag, r, n, nEff, p, threshold }], `strongest`
+ * (the engine's: largest |r| among lags with two thirds of the pairs) with `pSearch`, its p corrected for the search over lags.
  *
  * numbers:
- * - `strongest.lag` (months), `strongest.r`, `strongest.p`, `strongest.nEff`, `strongest.n`
+ * - `strongest.lag` (months), `strongest.r`, `strongest.p` (pointwise), `strongest.pSearch` (search-corrected), `strongest.nEff`, `strongest.n`
  * - `lag0.r` — correlation without lag
  */
-import { CORRELATION_CAUTION, lagCorrelation, lagCorrelationMethods, significanceThreshold, type LagCorrelationInput, type LagRow } from '@upwell/common';
+import { CORRELATION_CAUTION, POINTWISE_CAUTION, lagCorrelation, lagCorrelationMethods, significanceThreshold, type LagCorrelationInput, type LagRow } from '@upwell/common';
 import { seriesAnomaly } from '../figure-anomaly';
 import { seriesAt } from '../series-input';
 import { bindingAt, type FigureRecipeHandler } from './recipe';
@@ -23,24 +24,26 @@ export const lagCorrelationRecipe: FigureRecipeHandler<'lag-correlation'> = {
     const series = seriesAt(inputs, 'series');
     const x = seriesAnomaly(index, r.anomaly);
     const y = seriesAnomaly(series, r.anomaly);
-    const { lags } = lagCorrelation({ x, y, maxLag: r.maxLag, method: r.method } satisfies LagCorrelationInput);
+    const out = lagCorrelation({ x, y, maxLag: r.maxLag, method: r.method, significance: r.significance, surrogates: r.surrogates, seed: r.seed } satisfies LagCorrelationInput);
+    const { lags } = out;
     // The engine's row plus its threshold is the kind's LagRow: one definition of a lag row.
     const rows = lags.map((l) => ({ ...l, threshold: l.nEff === null ? null : significanceThreshold(l.nEff, r.alpha) }) satisfies LagRow);
-    // First of equal |r| wins, so the answer does not depend on floating-point ties' order.
-    const strongest = rows.reduce<(typeof rows)[number] | null>((a, b) => (b.r !== null && (a === null || Math.abs(b.r) > Math.abs(a.r!)) ? b : a), null);
+    // The engine's strongest lag (largest |r| among lags with two thirds of the pairs) carries pSearch, the p corrected for the search.
+    const strongest = out.strongest === null ? null : { ...rows.find((l) => l.lag === out.strongest!.lag)!, pSearch: out.strongest.pSearch };
     const zero = rows.find((l) => l.lag === 0)!;
     return {
       data: { method: r.method, alpha: r.alpha, lags: rows, strongest },
       numbers: [
         { key: 'strongest.lag', label: `Lag of the strongest correlation (positive: ${index.name} leads)`, value: strongest?.lag ?? null, units: 'months' },
         { key: 'strongest.r', label: 'Strongest correlation', value: strongest?.r ?? null, units: '' },
-        { key: 'strongest.p', label: 'p-value of the strongest correlation (two-sided, nEff)', value: strongest?.p ?? null, units: '' },
+        { key: 'strongest.p', label: 'Pointwise p-value of the strongest correlation (two-sided, nEff; not corrected for the search over lags)', value: strongest?.p ?? null, units: '' },
+        { key: 'strongest.pSearch', label: 'Search-corrected p-value of the strongest correlation (phase-randomised surrogates, Ebisuzaki 1997)', value: strongest?.pSearch ?? null, units: '' },
         { key: 'strongest.nEff', label: 'Effective sample size at the strongest lag', value: strongest?.nEff ?? null, units: 'pairs' },
         { key: 'strongest.n', label: 'Pairs at the strongest lag', value: strongest?.n ?? null, units: 'pairs' },
         { key: 'lag0.r', label: 'Correlation without lag', value: zero.r, units: '' },
       ],
       methods: lagCorrelationMethods(r, index, series),
-      cautions: [CORRELATION_CAUTION],
+      cautions: [CORRELATION_CAUTION, POINTWISE_CAUTION],
       warnings: [...x.warnings, ...y.warnings],
     };
   },

@@ -10,7 +10,7 @@
  * - `intercept` — series units
  * - `r2`, `n` (pairs)
  */
-import { CORRELATION_CAUTION, formatMonth, ols, parseMonth, scatterMethods } from '@upwell/common';
+import { CAUSATION_CAUTION, formatMonth, ols, parseMonth, scatterMethods } from '@upwell/common';
 import { seriesAnomaly } from '../figure-anomaly';
 import { seriesAt } from '../series-input';
 import { bindingAt, type FigureRecipeHandler } from './recipe';
@@ -49,7 +49,7 @@ export const scatterRecipe: FigureRecipeHandler<'scatter'> = {
         { key: 'n', label: 'Pairs', value: fit.n, units: 'pairs' },
       ],
       methods: scatterMethods(r, index, series),
-      cautions: [CORRELATION_CAUTION],
+      cautions: [CAUSATION_CAUTION],
       warnings: [...x.warnings, ...y.warnings],
     };
   },

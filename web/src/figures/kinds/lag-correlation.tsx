@@ -11,7 +11,10 @@ export function LagCorrelationFields({ series }: KindFieldsProps) {
         <Flex gap="3" wrap="wrap">
           <NumberField path="maxLag" label="Lags from −N to N months" />
           <ChoiceField path="method" label="Correlation" options={[['pearson', 'Pearson'], ['spearman', 'Spearman (ranks)']]} />
-          <NumberField path="alpha" label="Significance level α" step={0.01} />
+          <NumberField path="alpha" label="Significance level α (pointwise, each lag alone)" step={0.01} />
+          <ChoiceField path="significance" label="Per-lag test" options={[['ar1', 't test with AR(1) effective sample size'], ['phase-randomised', 'Phase-randomised surrogates']]} />
+          <NumberField path="surrogates" label="Surrogates for the search-corrected p of the strongest lag" />
+          <NumberField path="seed" label="Surrogate seed" />
         </Flex>
       </Group>
       <AnomalyFields />
