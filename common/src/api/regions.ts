@@ -38,7 +38,7 @@ const BOX_IDS = STANDARD_BOXES.map((b) => b.id) as [string, ...string[]];
 /** Where a region set's regions come from. */
 export const regionSetSourceSchema = z.discriminatedUnion('kind', [
   /** An integer mask variable with flag_values/flag_meanings in an uploaded NetCDF file. */
-  z.strictObject({ kind: z.literal('mask'), uploadId: z.uuid(), variable: z.string().trim().min(1).max(200) }),
+  z.strictObject({ kind: z.literal('mask'), uploadId: z.uuid(), variable: plainText({ what: 'variable' }).trim().min(1).max(200) }),
   z.strictObject({ kind: z.literal('geojson'), geojson: regionFeatureCollectionSchema }),
   z.strictObject({ kind: z.literal('standard-boxes'), boxIds: z.array(z.enum(BOX_IDS)).min(1).max(BOX_IDS.length) }),
 ]);
@@ -88,10 +88,10 @@ export const regionalBudgetRequestSchema = z
     regionSetId: z.uuid(),
     regionSetVersion: z.number().int().min(1).optional(),
     terms: z
-      .array(z.strictObject({ variable: z.string().trim().min(1).max(200), role: z.enum(BUDGET_ROLES), sign: z.union([z.literal(1), z.literal(-1)]).default(1) }))
+      .array(z.strictObject({ variable: plainText({ what: 'variable' }).trim().min(1).max(200), role: z.enum(BUDGET_ROLES), sign: z.union([z.literal(1), z.literal(-1)]).default(1) }))
       .min(1)
       .max(REGION_LIMITS.termsMax),
-    inventoryVariable: z.string().trim().min(1).max(200).optional(),
+    inventoryVariable: plainText({ what: 'inventoryVariable' }).trim().min(1).max(200).optional(),
     depthLimits: z.array(z.number().positive().max(REGION_LIMITS.maxDepthM)).max(REGION_LIMITS.depthLimitsMax).default([100]),
     units: z.enum(['Pg C/yr', 'mol/s']).default('Pg C/yr'),
     namePrefix: plainText({ what: 'namePrefix' }).trim().min(1).max(80),
